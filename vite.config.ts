@@ -1,0 +1,51 @@
+import { fileURLToPath, URL } from 'node:url';
+import { defineConfig } from 'vitest/config';
+import vue from '@vitejs/plugin-vue';
+import vuetify from 'vite-plugin-vuetify';
+
+const apiPort = Number(process.env.PORT ?? 3000);
+
+export default defineConfig({
+  plugins: [vue(), vuetify({ autoImport: false })],
+  resolve: {
+    alias: {
+      '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+      '@': fileURLToPath(new URL('./src', import.meta.url)),
+    },
+  },
+  server: {
+    host: '127.0.0.1',
+    proxy: { '/api': `http://127.0.0.1:${apiPort}` },
+  },
+  build: { outDir: 'dist', chunkSizeWarningLimit: 2000 },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: { name: 'unit', include: ['tests/shared/**/*.test.ts', 'tests/scripts/**/*.test.ts', 'tests/src/**/*.test.ts'], environment: 'node' },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'api',
+          include: ['tests/server/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 20000,
+          hookTimeout: 60000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 60000,
+          hookTimeout: 120000,
+        },
+      },
+    ],
+  },
+});
