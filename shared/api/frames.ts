@@ -1,0 +1,88 @@
+import { z } from 'zod';
+import { idSchema, isoDateSchema, nameSchema, userRefSchema } from './common';
+import { roleSchema } from './roles';
+
+export const frameParamsSchema = z.object({ frameId: idSchema });
+export const revisionParamsSchema = z.object({
+  frameId: idSchema,
+  version: z.coerce.number({ message: 'Must be a whole number' }).int({ message: 'Must be a whole number' }).min(1),
+});
+
+/**
+ * The frame document as it travels over the API. Its full schema lives in shared/model; the server validates it
+ * there (422 with fields on failure), so here it is only "a JSON object".
+ */
+export const frameDocumentJsonSchema = z.record(z.string(), z.unknown(), { message: 'Must be an object' });
+export type FrameDocumentJson = z.infer<typeof frameDocumentJsonSchema>;
+
+export const frameSummarySchema = z.object({
+  id: idSchema,
+  projectId: idSchema,
+  name: z.string(),
+  version: z.number().int(),
+  memberCount: z.number().int(),
+  updatedAt: isoDateSchema,
+  deletedAt: isoDateSchema.nullable(),
+});
+export type FrameSummary = z.infer<typeof frameSummarySchema>;
+
+export const frameSchema = z.object({
+  id: idSchema,
+  projectId: idSchema,
+  workshopId: idSchema,
+  name: z.string(),
+  version: z.number().int(),
+  document: frameDocumentJsonSchema,
+  memberCount: z.number().int(),
+  role: roleSchema,
+  updatedAt: isoDateSchema,
+  updatedBy: userRefSchema.nullable(),
+  deletedAt: isoDateSchema.nullable(),
+});
+/** GET /api/frames/:frameId and POST .../frames (201). */
+export type Frame = z.infer<typeof frameSchema>;
+
+export const listFramesQuerySchema = z.object({
+  /** 'true' lists the deleted frames only (the recovery list); otherwise the live ones. */
+  deleted: z.enum(['true', 'false'], { message: "Must be 'true' or 'false'" }).optional(),
+});
+
+export const createFrameRequestSchema = z.object({
+  name: nameSchema,
+  document: frameDocumentJsonSchema.optional(),
+});
+export type CreateFrameRequest = z.input<typeof createFrameRequestSchema>;
+
+/** PATCH /api/frames/:frameId → FrameSummary. Renaming does not change `version`. */
+export const renameFrameRequestSchema = z.object({ name: nameSchema });
+export type RenameFrameRequest = z.input<typeof renameFrameRequestSchema>;
+
+export const saveFrameDocumentRequestSchema = z.object({
+  baseVersion: z.number({ message: 'Must be a number' }).int({ message: 'Must be a whole number' }).min(1),
+  document: frameDocumentJsonSchema,
+});
+export type SaveFrameDocumentRequest = z.input<typeof saveFrameDocumentRequestSchema>;
+
+export const saveFrameDocumentResponseSchema = z.object({ version: z.number().int(), updatedAt: isoDateSchema });
+export type SaveFrameDocumentResponse = z.infer<typeof saveFrameDocumentResponseSchema>;
+
+/**
+ * GET /api/frames/:frameId/revisions, newest first. The first entry is the frame's current version
+ * (`current: true`); the others are the documents kept by earlier saves.
+ */
+export const revisionSummarySchema = z.object({
+  version: z.number().int(),
+  savedAt: isoDateSchema,
+  savedBy: userRefSchema.nullable(),
+  memberCount: z.number().int(),
+  current: z.boolean(),
+});
+export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+
+export const revisionSchema = z.object({
+  version: z.number().int(),
+  document: frameDocumentJsonSchema,
+  savedAt: isoDateSchema,
+  savedBy: userRefSchema.nullable(),
+});
+export type Revision = z.infer<typeof revisionSchema>;
