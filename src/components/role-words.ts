@@ -1,0 +1,20 @@
+import type { Action, Role } from '@shared/api';
+
+/** What each action lets someone do, worded to finish "…is needed to …". */
+export const ACTION_WORDS: Readonly<Record<Action, string>> = {
+  'workshop.manage': 'change the workshop itself',
+  'members.manage': 'manage the workshop’s members',
+  'project.write': 'create and edit projects',
+  'project.delete': 'delete projects',
+  'frame.write': 'create, rename and delete frames',
+  'cuts.tick': 'tick off cuts',
+  read: 'see this workshop’s projects',
+};
+
+/** Chip colours: owners and designers in the accent family, shop and client roles in greys. */
+export const ROLE_COLORS: Readonly<Record<Role, string>> = {
+  owner: 'primary',
+  designer: 'primary-darken-1',
+  cutter: 'secondary',
+  viewer: 'muted',
+};

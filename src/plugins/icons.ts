@@ -1,0 +1,63 @@
+import {
+  mdiAccountCircleOutline,
+  mdiAccountGroupOutline,
+  mdiAccountPlusOutline,
+  mdiAlertCircleOutline,
+  mdiArrowLeft,
+  mdiCheck,
+  mdiChevronDown,
+  mdiChevronRight,
+  mdiClose,
+  mdiDeleteOutline,
+  mdiDotsVertical,
+  mdiEyeOffOutline,
+  mdiEyeOutline,
+  mdiFolderOutline,
+  mdiHistory,
+  mdiLockOutline,
+  mdiLogout,
+  mdiMagnify,
+  mdiPencilOutline,
+  mdiPlus,
+  mdiRefresh,
+  mdiRestore,
+  mdiRuler,
+  mdiSwapHorizontal,
+  mdiVectorSquare,
+  mdiWarehouse,
+} from '@mdi/js';
+
+/**
+ * The app's own icon names, used as `$name` in templates (e.g. `icon="$rename"`), so each meaning maps to one
+ * shipped SVG path in one place.
+ */
+export const appIcons = {
+  add: mdiPlus,
+  addMember: mdiAccountPlusOutline,
+  account: mdiAccountCircleOutline,
+  back: mdiArrowLeft,
+  confirm: mdiCheck,
+  dismiss: mdiClose,
+  forbidden: mdiLockOutline,
+  frame: mdiVectorSquare,
+  hidePassword: mdiEyeOffOutline,
+  members: mdiAccountGroupOutline,
+  more: mdiDotsVertical,
+  open: mdiChevronRight,
+  problem: mdiAlertCircleOutline,
+  project: mdiFolderOutline,
+  recover: mdiRestore,
+  rename: mdiPencilOutline,
+  remove: mdiDeleteOutline,
+  retry: mdiRefresh,
+  revisions: mdiHistory,
+  search: mdiMagnify,
+  showPassword: mdiEyeOutline,
+  signOut: mdiLogout,
+  switchWorkshop: mdiSwapHorizontal,
+  units: mdiRuler,
+  workshop: mdiWarehouse,
+  menuDown: mdiChevronDown,
+} as const;
+
+export type AppIcon = `$${keyof typeof appIcons}`;

@@ -1,0 +1,84 @@
+import type { RouteRecordInfo, RouteRecordRaw } from 'vue-router';
+import type { Action } from '@shared/api';
+import SignInView from '@/views/SignInView.vue';
+
+type NoParams = Record<never, never>;
+type WorkshopParams = { workshopId: string };
+type ProjectParams = WorkshopParams & { projectId: string };
+type FrameParams = ProjectParams & { frameId: string };
+
+/** Every route by name, with its params: the closed set `router.push({ name })` and `useRoute(name)` accept. */
+export interface RouteNamedMap {
+  'sign-in': RouteRecordInfo<'sign-in', '/sign-in', NoParams, NoParams>;
+  home: RouteRecordInfo<'home', '/', NoParams, NoParams>;
+  workshops: RouteRecordInfo<'workshops', '/workshops', NoParams, NoParams>;
+  projects: RouteRecordInfo<'projects', '/w/:workshopId', WorkshopParams, WorkshopParams>;
+  members: RouteRecordInfo<'members', '/w/:workshopId/members', WorkshopParams, WorkshopParams>;
+  project: RouteRecordInfo<'project', '/w/:workshopId/projects/:projectId', ProjectParams, ProjectParams>;
+  frame: RouteRecordInfo<'frame', '/w/:workshopId/projects/:projectId/frames/:frameId', FrameParams, FrameParams>;
+  forbidden: RouteRecordInfo<'forbidden', '/forbidden', NoParams, NoParams>;
+  'not-found': RouteRecordInfo<'not-found', '/:pathMatch(.*)*', { pathMatch: string | string[] }, { pathMatch: string[] }>;
+}
+export type RouteName = keyof RouteNamedMap;
+
+declare module 'vue-router' {
+  interface TypesConfig {
+    RouteNamedMap: RouteNamedMap;
+  }
+  interface RouteMeta {
+    /** Open without signing in. */
+    public?: boolean;
+    /** What the member's role in the route's workshop must allow (see `can` in shared/api/roles.ts). */
+    requires?: Action;
+    /** Page title after "Slotwright · ". */
+    title?: string;
+  }
+}
+
+export const routes: RouteRecordRaw[] = [
+  { path: '/sign-in', name: 'sign-in', component: SignInView, meta: { public: true, title: 'Sign in' } },
+  // The guard sends home to the chosen workshop's projects.
+  { path: '/', name: 'home', component: () => import('@/views/WorkshopsView.vue') },
+  {
+    path: '/workshops',
+    name: 'workshops',
+    component: () => import('@/views/WorkshopsView.vue'),
+    meta: { title: 'Workshops' },
+  },
+  {
+    path: '/w/:workshopId',
+    name: 'projects',
+    component: () => import('@/views/ProjectsView.vue'),
+    meta: { requires: 'read', title: 'Projects' },
+  },
+  {
+    path: '/w/:workshopId/members',
+    name: 'members',
+    component: () => import('@/views/MembersView.vue'),
+    meta: { requires: 'members.manage', title: 'Members' },
+  },
+  {
+    path: '/w/:workshopId/projects/:projectId',
+    name: 'project',
+    component: () => import('@/views/ProjectView.vue'),
+    meta: { requires: 'read', title: 'Project' },
+  },
+  {
+    path: '/w/:workshopId/projects/:projectId/frames/:frameId',
+    name: 'frame',
+    component: () => import('@/views/FrameView.vue'),
+    meta: { requires: 'read', title: 'Frame' },
+  },
+  {
+    path: '/forbidden',
+    name: 'forbidden',
+    component: () => import('@/views/ForbiddenView.vue'),
+    meta: { title: 'Not allowed' },
+  },
+  {
+    path: '/:pathMatch(.*)*',
+    name: 'not-found',
+    component: () => import('@/views/NotFoundView.vue'),
+    meta: { public: true, title: 'Not found' },
+  },
+];
