@@ -1,0 +1,43 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { DEMO, DEMO_PROJECT, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+
+describe('the projects page', () => {
+  let browser: Browser;
+  let page: Page;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    page = await newPage(browser);
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('lists the demo project, searches, and is captured for review', async () => {
+    await signIn(page, DEMO.owner);
+    const table = page.getByRole('table');
+    await table.getByRole('link', { name: DEMO_PROJECT }).waitFor();
+    await page.evaluate(() => document.fonts.ready);
+    await page.screenshot({ path: screenshotPath('projects-page.png'), fullPage: true });
+
+    await page.getByLabel('Search projects').fill('no such project zz');
+    await page.getByText('No project matches that search.').waitFor();
+    await page.getByLabel('Search projects').fill('kitchen');
+    await table.getByRole('link', { name: DEMO_PROJECT }).waitFor();
+  });
+
+  it('renders in Barlow, shipped with the app', async () => {
+    const family = await page.evaluate(() => getComputedStyle(document.querySelector('h1')!).fontFamily);
+    expect(family).toContain('Barlow');
+    expect(await page.evaluate(() => document.fonts.check('16px Barlow'))).toBe(true);
+  });
+
+  it('shows owners the members page with each role in plain words', async () => {
+    await page.getByRole('link', { name: 'Members' }).click();
+    await page.getByRole('heading', { name: 'Members', level: 1 }).waitFor();
+    const members = page.getByRole('table', { name: 'Members' });
+    for (const email of Object.values(DEMO)) await members.getByText(email).waitFor();
+    await page.screenshot({ path: screenshotPath('members-page.png'), fullPage: true });
+  });
+});
