@@ -29,6 +29,7 @@ export default defineConfig({
         test: {
           name: 'api',
           include: ['tests/server/**/*.test.ts'],
+          globalSetup: ['tests/support/api-global-setup.ts'],
           environment: 'node',
           fileParallelism: false,
           testTimeout: 20000,

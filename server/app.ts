@@ -1,0 +1,96 @@
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import express, { type Express, type RequestHandler } from 'express';
+import helmet from 'helmet';
+import type session from 'express-session';
+import { RequestContext } from '@mikro-orm/core';
+import type { Config } from './config';
+import { createSessionPool, type Orm } from './db';
+import { NotFoundError } from './errors';
+import { csrfProtection } from './http/csrf';
+import { errorHandler, type ErrorLogger } from './http/error-handler';
+import { createSessionStore, sessionMiddleware } from './http/session';
+import { authRouter } from './modules/auth/auth.routes';
+import { framesRouter } from './modules/frames/frames.routes';
+import { healthRouter } from './modules/health/health.routes';
+import { projectsRouter } from './modules/projects/projects.routes';
+import { workshopsRouter } from './modules/workshops/workshops.routes';
+
+export interface Services {
+  orm: Orm;
+  config: Config;
+  /** Where sessions live; when omitted the app opens its own PostgreSQL store (closed by disposeApp). */
+  sessionStore?: session.Store;
+  /** Where unexpected errors are reported; defaults to stderr. */
+  logError?: ErrorLogger;
+}
+
+const ownedStores = new WeakMap<Express, { close(): Promise<void> }>();
+
+const defaultLogger: ErrorLogger = (message, err) => {
+  console.error(message, err);
+};
+
+function clientFiles(dir: string): RequestHandler[] {
+  const root = resolve(dir);
+  const index = resolve(root, 'index.html');
+  if (!existsSync(index)) return [];
+  const spaFallback: RequestHandler = (req, res, next) => {
+    if ((req.method !== 'GET' && req.method !== 'HEAD') || req.path.startsWith('/api/') || req.path === '/api') return next();
+    res.sendFile(index);
+  };
+  return [express.static(root, { index: 'index.html', maxAge: '1h' }), spaFallback];
+}
+
+/** Builds the HTTP app; listening, and closing the ORM and pools, are the caller's business. */
+export function createApp(services: Services): Express {
+  const { orm, config } = services;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+
+  let store = services.sessionStore;
+  if (!store) {
+    const pool = createSessionPool(config);
+    const own = createSessionStore(pool);
+    ownedStores.set(app, {
+      close: async () => {
+        (own as session.Store & { close?: () => void }).close?.();
+        await pool.end();
+      },
+    });
+    store = own;
+  }
+
+  // Upgrading sub-requests to https only makes sense when the site is served over https.
+  app.use(
+    helmet({
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: config.cookieSecure === true ? [] : null } },
+    }),
+  );
+
+  // Before the session, so health checks and static files never touch the session table.
+  app.use('/api', healthRouter(orm));
+  if (config.serveClient) app.use(clientFiles(config.clientDir));
+
+  const api = express.Router();
+  api.use(express.json({ limit: config.bodyLimit }));
+  api.use(sessionMiddleware(config, store));
+  api.use(csrfProtection());
+  api.use((_req, _res, next) => RequestContext.create(orm.em, next));
+  api.use(authRouter(orm, config));
+  api.use(workshopsRouter(orm));
+  api.use(projectsRouter(orm));
+  api.use(framesRouter(orm));
+  api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
+  app.use('/api', api);
+
+  app.use(errorHandler(services.logError ?? defaultLogger));
+  return app;
+}
+
+/** Closes what createApp opened itself (the session store when none was passed in). */
+export async function disposeApp(app: Express): Promise<void> {
+  await ownedStores.get(app)?.close();
+  ownedStores.delete(app);
+}

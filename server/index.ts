@@ -1,0 +1,49 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { ConfigError, loadConfig } from './config';
+import { createOrm, createSessionPool } from './db';
+import { createSessionStore } from './http/session';
+
+// Listen, and on SIGINT/SIGTERM stop taking connections, let requests in flight finish, then close the
+// session store, its pool and the ORM, so no transaction is left half-done.
+
+async function main(): Promise<void> {
+  const config = loadConfig();
+  if (config.sessionSecretGenerated) {
+    console.warn('SESSION_SECRET is not set: using a random one, so sessions end when the server stops.');
+  }
+  const orm = await createOrm(config);
+  const pool = createSessionPool(config);
+  const sessionStore = createSessionStore(pool);
+  const app = createApp({ orm, config, sessionStore });
+
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.listen(config.port, config.host, (err?: Error) => (err ? reject(err) : resolve(s)));
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.port;
+  console.log(`Slotwright API listening on http://${config.host}:${port}/api`);
+
+  let closing = false;
+  const shutdown = async (signal: string) => {
+    if (closing) return;
+    closing = true;
+    console.log(`${signal}: shutting down`);
+    // Idle keep-alive sockets would otherwise hold server.close() open.
+    const force = setTimeout(() => server.closeAllConnections(), 10_000).unref();
+    server.closeIdleConnections();
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    clearTimeout(force);
+    (sessionStore as typeof sessionStore & { close?: () => void }).close?.();
+    await pool.end();
+    await orm.close(true);
+    process.exit(0);
+  };
+  process.on('SIGINT', () => void shutdown('SIGINT'));
+  process.on('SIGTERM', () => void shutdown('SIGTERM'));
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof ConfigError ? err.message : err);
+  process.exit(1);
+});

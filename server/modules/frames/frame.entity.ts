@@ -1,0 +1,28 @@
+import { randomUUID } from 'node:crypto';
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import type { FrameDocumentJson } from '@shared/api/frames';
+import { Project } from '../projects/project.entity';
+import { User } from '../users/user.entity';
+
+// `version` is the document's version, compared with the client's baseVersion on save (optimistic locking
+// done by the service under a row lock, not by the ORM, because renaming must not bump it).
+// `memberCount` is derived from the document on every save, so lists can leave the document column out.
+export const Frame = defineEntity({
+  name: 'Frame',
+  tableName: 'frames',
+  properties: {
+    id: p.uuid().primary().onCreate(() => randomUUID()),
+    project: p.manyToOne(Project).deleteRule('cascade').index('frames_project_idx'),
+    name: p.string().columnType('text'),
+    document: p.json<FrameDocumentJson>().columnType('jsonb'),
+    version: p.integer().default(1),
+    memberCount: p.integer().default(0),
+    savedAt: p.datetime().onCreate(() => new Date()),
+    savedBy: p.manyToOne(User).nullable().deleteRule('set null'),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    deletedAt: p.datetime().nullable(),
+  },
+  checks: [{ name: 'frames_version_positive', expression: 'version >= 1' }],
+});
+export type FrameEntity = InferEntity<typeof Frame>;

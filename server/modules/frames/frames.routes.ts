@@ -1,0 +1,100 @@
+import { Router } from 'express';
+import type { Frame, FrameSummary, Revision, RevisionSummary, SaveFrameDocumentResponse } from '@shared/api/frames';
+import {
+  createFrameRequestSchema,
+  frameParamsSchema,
+  listFramesQuerySchema,
+  renameFrameRequestSchema,
+  revisionParamsSchema,
+  saveFrameDocumentRequestSchema,
+} from '@shared/api/frames';
+import { projectParamsSchema } from '@shared/api/projects';
+import type { Orm } from '../../db';
+import { currentUserId } from '../../http/current-user';
+import { parseInput } from '../../validate';
+import { authorizeFrame, authorizeProject } from '../access/access.service';
+import {
+  createFrame,
+  deleteFrame,
+  getFrame,
+  getRevision,
+  listFrameSummaries,
+  listRevisions,
+  renameFrame,
+  restoreFrame,
+  saveFrameDocument,
+} from './frames.service';
+
+export function framesRouter(orm: Orm): Router {
+  const router = Router();
+
+  router.get('/projects/:projectId/frames', async (req, res) => {
+    const userId = currentUserId(req);
+    const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
+    const { deleted } = parseInput(listFramesQuerySchema, req.query, 'query');
+    await authorizeProject(orm.em, userId, projectId, 'read');
+    res.json((await listFrameSummaries(orm.em, projectId, deleted === 'true')) satisfies FrameSummary[]);
+  });
+
+  router.post('/projects/:projectId/frames', async (req, res) => {
+    const userId = currentUserId(req);
+    const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
+    const { project, role } = await authorizeProject(orm.em, userId, projectId, 'frame.write');
+    const input = parseInput(createFrameRequestSchema, req.body);
+    res.status(201).json((await createFrame(orm.em, project, role, userId, input)) satisfies Frame);
+  });
+
+  router.get('/frames/:frameId', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { frame, role } = await authorizeFrame(orm.em, userId, frameId, 'read');
+    res.json((await getFrame(orm.em, frame, role)) satisfies Frame);
+  });
+
+  router.patch('/frames/:frameId', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const { name } = parseInput(renameFrameRequestSchema, req.body);
+    res.json((await renameFrame(orm.em, frame, name)) satisfies FrameSummary);
+  });
+
+  router.put('/frames/:frameId/document', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const { baseVersion, document } = parseInput(saveFrameDocumentRequestSchema, req.body);
+    res.json((await saveFrameDocument(orm.em, frameId, userId, baseVersion, document)) satisfies SaveFrameDocumentResponse);
+  });
+
+  router.get('/frames/:frameId/revisions', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
+    res.json((await listRevisions(orm.em, frame)) satisfies RevisionSummary[]);
+  });
+
+  router.get('/frames/:frameId/revisions/:version', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId, version } = parseInput(revisionParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
+    res.json((await getRevision(orm.em, frame, version)) satisfies Revision);
+  });
+
+  router.delete('/frames/:frameId', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    await deleteFrame(orm.em, frame);
+    res.status(204).end();
+  });
+
+  router.post('/frames/:frameId/restore', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    res.json((await restoreFrame(orm.em, frame)) satisfies FrameSummary);
+  });
+
+  return router;
+}

@@ -1,0 +1,70 @@
+import { Router } from 'express';
+import type { Member, WorkshopSummary } from '@shared/api/workshops';
+import {
+  addMemberRequestSchema,
+  createWorkshopRequestSchema,
+  memberParamsSchema,
+  renameWorkshopRequestSchema,
+  updateMemberRequestSchema,
+  workshopParamsSchema,
+} from '@shared/api/workshops';
+import type { Orm } from '../../db';
+import { currentUserId } from '../../http/current-user';
+import { parseInput } from '../../validate';
+import { authorizeWorkshop } from '../access/access.service';
+import { addMember, createWorkshop, listMembers, listWorkshops, removeMember, renameWorkshop, updateMemberRole } from './workshops.service';
+
+export function workshopsRouter(orm: Orm): Router {
+  const router = Router();
+
+  router.get('/workshops', async (req, res) => {
+    res.json((await listWorkshops(orm.em, currentUserId(req))) satisfies WorkshopSummary[]);
+  });
+
+  router.post('/workshops', async (req, res) => {
+    const userId = currentUserId(req);
+    const { name } = parseInput(createWorkshopRequestSchema, req.body);
+    res.status(201).json((await createWorkshop(orm.em, userId, name)) satisfies WorkshopSummary);
+  });
+
+  router.patch('/workshops/:workshopId', async (req, res) => {
+    const userId = currentUserId(req);
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    const role = await authorizeWorkshop(orm.em, userId, workshopId, 'workshop.manage');
+    const { name } = parseInput(renameWorkshopRequestSchema, req.body);
+    res.json((await renameWorkshop(orm.em, workshopId, role, name)) satisfies WorkshopSummary);
+  });
+
+  router.get('/workshops/:workshopId/members', async (req, res) => {
+    const userId = currentUserId(req);
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, userId, workshopId, 'read');
+    res.json((await listMembers(orm.em, workshopId)) satisfies Member[]);
+  });
+
+  router.post('/workshops/:workshopId/members', async (req, res) => {
+    const userId = currentUserId(req);
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, userId, workshopId, 'members.manage');
+    const { email, role } = parseInput(addMemberRequestSchema, req.body);
+    res.status(201).json((await addMember(orm.em, workshopId, email, role)) satisfies Member);
+  });
+
+  router.patch('/workshops/:workshopId/members/:userId', async (req, res) => {
+    const me = currentUserId(req);
+    const params = parseInput(memberParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, me, params.workshopId, 'members.manage');
+    const { role } = parseInput(updateMemberRequestSchema, req.body);
+    res.json((await updateMemberRole(orm.em, params.workshopId, params.userId, role)) satisfies Member);
+  });
+
+  router.delete('/workshops/:workshopId/members/:userId', async (req, res) => {
+    const me = currentUserId(req);
+    const params = parseInput(memberParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, me, params.workshopId, 'members.manage');
+    await removeMember(orm.em, params.workshopId, params.userId);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,31 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { healthResponseSchema } from '@shared/api/errors';
+import { createTestContext, type TestContext } from '../support/test-app';
+
+describe('GET /api/health', () => {
+  let ctx: TestContext;
+  beforeAll(async () => {
+    ctx = await createTestContext();
+  });
+  afterAll(() => ctx.close());
+
+  it('reports the database up', async () => {
+    const res = await request(ctx.app).get('/api/health').expect(200);
+    expect(healthResponseSchema.parse(res.body)).toEqual({ ok: true, db: 'up' });
+  });
+
+  it('answers without creating a session', async () => {
+    const res = await request(ctx.app).get('/api/health').expect(200);
+    expect(res.headers['set-cookie']).toBeUndefined();
+  });
+
+  it('reports 503 when the database connection is gone', async () => {
+    const down = await createTestContext();
+    await down.orm.close(true);
+    const res = await request(down.app).get('/api/health');
+    expect(res.status).toBe(503);
+    expect(res.body).toEqual({ ok: false, db: 'down' });
+    await down.close();
+  });
+});

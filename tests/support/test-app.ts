@@ -1,0 +1,61 @@
+import type { Express } from 'express';
+import type pg from 'pg';
+import type session from 'express-session';
+import { createApp } from '../../server/app';
+import { loadConfig, type Config } from '../../server/config';
+import { createOrm, createSessionPool, type Orm } from '../../server/db';
+import { createSessionStore } from '../../server/http/session';
+
+// One running app over the test database, built the way server/index.ts builds it.
+
+export interface TestContext {
+  app: Express;
+  orm: Orm;
+  config: Config;
+  /** Unexpected errors the app reported (a test that provokes a 500 can look here). */
+  loggedErrors: unknown[];
+  close(): Promise<void>;
+}
+
+export const TEST_SESSION_SECRET = 'test-session-secret-0123456789abcdef';
+
+export function testConfig(overrides: Record<string, string> = {}): Config {
+  return loadConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    SESSION_SECRET: TEST_SESSION_SECRET,
+    SERVE_CLIENT: 'false',
+    ...overrides,
+  });
+}
+
+export async function createTestContext(overrides: Record<string, string> = {}): Promise<TestContext> {
+  const config = testConfig(overrides);
+  const orm = await createOrm(config);
+  const pool: pg.Pool = createSessionPool(config);
+  const store: session.Store = createSessionStore(pool, { pruneIntervalSeconds: false });
+  const loggedErrors: unknown[] = [];
+  const app = createApp({ orm, config, sessionStore: store, logError: (_m, err) => loggedErrors.push(err) });
+  let closed = false;
+  return {
+    app,
+    orm,
+    config,
+    loggedErrors,
+    async close() {
+      if (closed) return;
+      closed = true;
+      (store as session.Store & { close?: () => void }).close?.();
+      await pool.end();
+      await orm.close(true);
+    },
+  };
+}
+
+/** Empties every table (schema stays), so a test file starts from nothing. */
+export async function truncateAll(orm: Orm): Promise<void> {
+  await orm.em
+    .fork()
+    .getConnection()
+    .execute('truncate table frame_revisions, frames, projects, memberships, workshops, users, "session" restart identity cascade');
+}
