@@ -61,7 +61,7 @@ const DEFS: Def[] = [
       rows: 2,
       slot: SLOT_8_ON_40,
       cornerCavity: { size: 5.4, inset: 1.8 },
-      jointCavity: { width: 24, height: 16 },
+      jointCavity: { width: 36.4, height: 14 },
     },
   },
   {
@@ -92,7 +92,7 @@ const DEFS: Def[] = [
       rows: 2,
       slot: SLOT_ON_1IN,
       cornerCavity: { size: 2.6, inset: 1.5 },
-      jointCavity: { width: 15, height: 8 },
+      jointCavity: { width: 22.2, height: 7.8 },
     },
   },
   {
@@ -115,7 +115,7 @@ const DEFS: Def[] = [
       rows: 2,
       slot: SLOT_ON_15IN,
       cornerCavity: { size: 5.4, inset: 1.8 },
-      jointCavity: { width: 24, height: 14 },
+      jointCavity: { width: 34.5, height: 14 },
     },
   },
 ];

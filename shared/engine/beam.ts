@@ -7,6 +7,13 @@ import { InputError } from '../errors';
  * Units: mm, N, MPa (N/mm²). x runs from the left support (the fixed end of a cantilever) to the right (the free
  * end). Loads act downwards when positive; deflection is positive downwards; a sagging moment is positive.
  */
+/** To show beside any load result: the figures screen a design, they do not certify it. */
+export const BEAM_CAUTION =
+  'Beam figures are a screening estimate from textbook formulas for an ideal single span: they do not certify a ' +
+  'design. Joints, brackets and fixings are often weaker than the member. In a moving vehicle loads are multiplied ' +
+  'by bumps, braking and cornering, and crash loads are far higher: follow local vehicle regulations and have ' +
+  'anything that carries people or heavy modules checked by a qualified engineer.';
+
 export type BeamSupport = 'simple' | 'fixed' | 'cantilever';
 
 export type BeamLoad =
