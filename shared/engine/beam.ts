@@ -142,26 +142,42 @@ function fullUdlM(s: BeamSupport, L: number, w: number, x: number): number {
   }
 }
 
-// ---- a partial UDL: the point-load forms integrated over the loaded length --------------------------------------
+// ---- a partial UDL w from c to d: Macaulay's method -------------------------------------------------------------
 
-// For a fixed x, each point-load form above is a polynomial of degree ≤ 3 in the load position a on either side
-// of a = x, so 3-point Gauss–Legendre quadrature on each side is exact, not an approximation.
-const GAUSS = [
-  { t: -Math.sqrt(3 / 5), w: 5 / 9 },
-  { t: 0, w: 8 / 9 },
-  { t: Math.sqrt(3 / 5), w: 5 / 9 },
-];
+// Double integration with singularity functions (Macaulay's method; e.g. Gere & Timoshenko, Mechanics of
+// Materials): M(x) = M1 + R1·x − w/2·(⟨x−c⟩² − ⟨x−d⟩²) and EI·y = −(M1·x²/2 + R1·x³/6 − w/24·(⟨x−c⟩⁴ − ⟨x−d⟩⁴)) + C1·x,
+// with the end moment M1, left reaction R1 and slope constant C1 fixed by each support's boundary conditions.
+const mac = (x: number, k: number, n: number): number => (x > k ? (x - k) ** n : 0);
 
-function integrate(f: (a: number) => number, lo: number, hi: number, x: number): number {
-  const piece = (p: number, q: number) => {
-    if (q <= p) return 0;
-    const h = (q - p) / 2;
-    const m = (q + p) / 2;
-    let s = 0;
-    for (const g of GAUSS) s += g.w * f(m + h * g.t);
-    return s * h;
+function partialUdl(s: BeamSupport, L: number, w: number, c: number, d: number): Influence {
+  const q = w * (d - c);
+  const A3 = (L - c) ** 3 - (L - d) ** 3;
+  const A4 = (L - c) ** 4 - (L - d) ** 4;
+  let M1 = 0;
+  let R1: number;
+  let C1 = 0;
+  switch (s) {
+    case 'simple': // y(0) = y(L) = 0, M1 = 0
+      R1 = (q * (L - (c + d) / 2)) / L;
+      C1 = ((R1 * L ** 3) / 6 - (w * A4) / 24) / L;
+      break;
+    case 'fixed': // y and y' zero at both ends
+      R1 = (w * (A3 * L - A4 / 2)) / L ** 3;
+      M1 = ((w * A3) / 6 - (R1 * L * L) / 2) / L;
+      break;
+    case 'cantilever': // y and y' zero at x = 0; statics gives the rest
+      R1 = q;
+      M1 = (-q * (c + d)) / 2;
+      break;
+  }
+  const candidates = [c, d];
+  if (w !== 0 && c + R1 / w > c && c + R1 / w < d) candidates.push(c + R1 / w); // zero shear: a moment extreme
+  return {
+    deflection: (x) => -((M1 * x * x) / 2 + (R1 * x ** 3) / 6 - (w / 24) * (mac(x, c, 4) - mac(x, d, 4))) + C1 * x,
+    moment: (x) => M1 + R1 * x - (w / 2) * (mac(x, c, 2) - mac(x, d, 2)),
+    reactions: s === 'cantilever' ? [q, 0] : [R1, q - R1],
+    candidates,
   };
-  return x > lo && x < hi ? piece(lo, x) + piece(x, hi) : piece(lo, hi);
 }
 
 function influenceOf(load: BeamLoad, s: BeamSupport, L: number): Influence {
@@ -191,17 +207,7 @@ function influenceOf(load: BeamLoad, s: BeamSupport, L: number): Influence {
       candidates: [L / 2],
     };
   }
-  const [r1, r2] = [
-    integrate((a) => pointReactions(s, L, w, a)[0], lo, hi, NaN),
-    integrate((a) => pointReactions(s, L, w, a)[1], lo, hi, NaN),
-  ];
-  return {
-    deflection: (x) => integrate((a) => pointEIy(s, L, w, a, x), lo, hi, x),
-    moment: (x) => integrate((a) => pointM(s, L, w, a, x), lo, hi, x),
-    reactions: [r1, r2],
-    // Zero shear inside the loaded length puts a moment extreme there; its ends bound the search.
-    candidates: [lo, hi, (lo + hi) / 2],
-  };
+  return partialUdl(s, L, w, lo, hi);
 }
 
 function validate(input: BeamInput): void {
@@ -232,7 +238,7 @@ function validate(input: BeamInput): void {
   });
 }
 
-const GRID = 64;
+const GRID = 48;
 const GOLDEN = (Math.sqrt(5) - 1) / 2;
 
 /** Position in [lo, hi] maximising f, assuming f is unimodal there (golden-section search). */
@@ -285,7 +291,7 @@ function extreme(f: (x: number) => number, L: number, candidates: number[]): { x
     [x, hi],
   ]) {
     if (q > p) {
-      const r = refine(abs, p, q, L * 1e-7); // the value's error goes with the square of x's
+      const r = refine(abs, p, q, L * 1e-6); // the value's error goes with the square of x's
       if (abs(r) > abs(x)) x = r;
     }
   }
@@ -299,8 +305,16 @@ export function beam(input: BeamInput): BeamResult {
   const EI = input.E_MPa * input.I_mm4;
   const parts = input.loads.map((l) => influenceOf(l, support, L));
   const candidates = [0, L, L / 2, ...parts.flatMap((p) => p.candidates)];
-  const y = (x: number) => parts.reduce((s, p) => s + p.deflection(x), 0) / EI;
-  const m = (x: number) => parts.reduce((s, p) => s + p.moment(x), 0);
+  const y = (x: number) => {
+    let sum = 0;
+    for (const p of parts) sum += p.deflection(x);
+    return sum / EI;
+  };
+  const m = (x: number) => {
+    let sum = 0;
+    for (const p of parts) sum += p.moment(x);
+    return sum;
+  };
   const d = extreme(y, L, candidates);
   const mm = extreme(m, L, candidates);
   const reactions = parts.reduce<[number, number]>((s, p) => [s[0] + p.reactions[0], s[1] + p.reactions[1]], [0, 0]);
