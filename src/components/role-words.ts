@@ -1,6 +1,6 @@
 import type { Action, Role } from '@shared/api';
 
-/** What each action lets someone do, worded to finish "…is needed to …". */
+/** What each action lets someone do, worded to follow "does not let you …". */
 export const ACTION_WORDS: Readonly<Record<Action, string>> = {
   'workshop.manage': 'change the workshop itself',
   'members.manage': 'manage the workshop’s members',
