@@ -1,6 +1,6 @@
 import request from 'supertest';
 import type { Express } from 'express';
-import type { Response } from 'supertest';
+import type { Response, Test } from 'supertest';
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -22,7 +22,7 @@ export class ApiClient {
     return this.csrf;
   }
 
-  send(method: Method, url: string, body?: unknown): Promise<Response> {
+  send(method: Method, url: string, body?: unknown): Test {
     let req = this.agent[method](url);
     if (this.csrf) req = req.set('X-CSRF-Token', this.csrf);
     if (body !== undefined) req = req.send(body as object);

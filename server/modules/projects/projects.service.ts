@@ -1,4 +1,4 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
+import { raw, type EntityManager } from '@mikro-orm/postgresql';
 import type { ProjectDetail, ProjectSummary } from '@shared/api/projects';
 import type { Role } from '@shared/api/roles';
 import { Frame } from '../frames/frame.entity';
@@ -10,11 +10,11 @@ async function liveFrameCounts(em: EntityManager, projectIds: string[]): Promise
   if (projectIds.length === 0) return new Map();
   const rows = await em
     .createQueryBuilder(Frame, 'f')
-    .select(['f.project', 'count(*) as count'])
+    .select(['f.project', raw('count(*)::int as count')])
     .where({ project: { $in: projectIds }, deletedAt: null })
     .groupBy('f.project')
-    .execute<{ project: string; count: string | number }[]>('all', false);
-  return new Map(rows.map((r) => [r.project, Number(r.count)]));
+    .execute<{ project_id: string; count: number }[]>('all', false);
+  return new Map(rows.map((r) => [r.project_id, Number(r.count)]));
 }
 
 function toSummary(p: ProjectEntity, frameCount: number): ProjectSummary {

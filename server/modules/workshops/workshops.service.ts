@@ -1,4 +1,4 @@
-import { LockMode, type EntityManager } from '@mikro-orm/postgresql';
+import { LockMode, raw, type EntityManager } from '@mikro-orm/postgresql';
 import type { Member, WorkshopSummary } from '@shared/api/workshops';
 import type { Role } from '@shared/api/roles';
 import { ConflictError, NotFoundError, UnprocessableError } from '../../errors';
@@ -11,11 +11,11 @@ async function memberCounts(em: EntityManager, workshopIds: string[]): Promise<M
   if (workshopIds.length === 0) return new Map();
   const rows = await em
     .createQueryBuilder(Membership, 'm')
-    .select(['m.workshop', 'count(*) as count'])
+    .select(['m.workshop', raw('count(*)::int as count')])
     .where({ workshop: { $in: workshopIds } })
     .groupBy('m.workshop')
-    .execute<{ workshop: string; count: string | number }[]>('all', false);
-  return new Map(rows.map((r) => [r.workshop, Number(r.count)]));
+    .execute<{ workshop_id: string; count: number }[]>('all', false);
+  return new Map(rows.map((r) => [r.workshop_id, Number(r.count)]));
 }
 
 function toSummary(w: WorkshopEntity, role: Role, memberCount: number): WorkshopSummary {
