@@ -1,0 +1,20 @@
+import { PROFILE_DISCLAIMER } from '../catalog/profiles';
+
+/** Shown with every report, wherever a load result appears. */
+export const CAUTIONS: readonly string[] = [
+  'Screening calculation only, not an engineering approval. Deflections and stresses come from standard beam formulas on generic section properties and simplified load paths.',
+  'In a moving vehicle, braking, cornering and crash loads act in every direction and crash loads are far higher than the shock factor used here: they are governed by vehicle regulations. Have the design and its fixings assessed by a qualified person.',
+  "Fix the frame to the vehicle's structure only at points the vehicle maker allows, and latch drawers and doors so they stay shut on the road.",
+  'Gas, electrical and water work follow their own codes and need licensed trades where the law requires them.',
+  PROFILE_DISCLAIMER,
+  'Hardware masses are approximate, worked from rough shapes and material densities.',
+];
+
+export const SHOCK_FACTOR_NOTE =
+  'Loads are multiplied by the shock factor for road bumps: 2–3 g vertical is common practice for fittings in a van (no published value). Use 1 for a frame that never moves.';
+
+export const SAFETY_FACTOR_NOTE =
+  "Bending stress is held to the alloy's design-minimum yield divided by this safety factor (default 1.65, the Aluminum Design Manual's factor for yielding, recalled from memory).";
+
+export const DEFLECTION_NOTE =
+  'Deflection under the shock-factored load is held to span / N (default 240: IBC Table 1604.3, total load on floors); cantilevers use twice their length.';

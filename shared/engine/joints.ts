@@ -1,0 +1,269 @@
+import { crossAxes, type Vec3 } from '../model/axis';
+import type { FrameDocument } from '../model/frame-document';
+import { roleOf } from '../model/member';
+import { ai, cloneBox, overlapOn, type Box } from './box';
+import { fitsFreeEnd, fitsJoint, type MethodDef } from './join-methods';
+import type { MemberGeometry } from './resolve-members';
+import { SpatialHash } from './spatial-hash';
+import type { ReportWarning } from './warnings';
+
+/** Faces closer than this are touching (mm): well below any saw's accuracy, well above float noise. */
+export const TOUCH_MM = 0.05;
+
+export type EndName = 'start' | 'end';
+export const END_NAMES: readonly EndName[] = ['start', 'end'];
+
+/**
+ * - `butt`: an end against another member's face part-way along it (a T); the other runs through.
+ * - `corner`: two ends meeting (an L); one runs through to the far side, the other is cut to its face.
+ * - `inline`: two members end to end on one line (a splice).
+ */
+export type JointKind = 'butt' | 'corner' | 'inline';
+
+export type Joint = {
+  id: string;
+  kind: JointKind;
+  butting: number;
+  buttingEnd: EndName;
+  /** The member it butts against (butt, corner), or the partner (inline). */
+  other: number;
+  otherEnd: EndName | null;
+  through: number | null;
+  method: string;
+  at: Vec3;
+};
+
+/** How a member end finishes: butting into a joint, running through one (its end face open), or free. */
+export type EndRole = 'butts' | 'runs-through' | 'free';
+export type EndInfo = { role: EndRole; joint: number | null; method: string };
+
+export type JointsResult = { joints: Joint[]; effective: Box[]; ends: [EndInfo, EndInfo][]; warnings: ReportWarning[] };
+
+type Contact = { kind: 'face' | 'corner' | 'inline'; other: number; otherEnd: EndName | null; area: number };
+
+const endCoord = (b: Box, axis: number, end: EndName): number => (end === 'start' ? b.min[axis] : b.max[axis]);
+
+function betterContact(c: Contact, best: Contact | null): boolean {
+  if (!best) return true;
+  if (Math.abs(c.area - best.area) > 1e-6) return c.area > best.area;
+  if ((c.kind === 'inline') !== (best.kind === 'inline')) return best.kind === 'inline';
+  return c.other < best.other;
+}
+
+/** What each member end touches, found through a spatial hash. */
+function findContacts(members: readonly MemberGeometry[]): (Contact | null)[][] {
+  let largest = 0;
+  for (const m of members) largest = Math.max(largest, m.info.profile.width_mm, m.info.profile.height_mm);
+  const hash = new SpatialHash(Math.max(100, 2 * largest), members.length);
+  members.forEach((m, i) => hash.insert(i, m.drawn));
+
+  return members.map((m, i) => {
+    const a = ai(m.axis);
+    const [p, q] = crossAxes(m.axis).map(ai);
+    return END_NAMES.map((end) => {
+      const s = endCoord(m.drawn, a, end);
+      const region = cloneBox(m.drawn);
+      region.min[a] = s - TOUCH_MM;
+      region.max[a] = s + TOUCH_MM;
+      let best: Contact | null = null;
+      for (const j of hash.query(region)) {
+        if (j === i) continue;
+        const n = members[j];
+        const nb = n.drawn;
+        const op = overlapOn(m.drawn, nb, p);
+        const oq = overlapOn(m.drawn, nb, q);
+        if (op <= TOUCH_MM || oq <= TOUCH_MM) continue;
+        if (nb.min[a] > s + TOUCH_MM || nb.max[a] < s - TOUCH_MM) continue;
+        let c: Contact;
+        if (n.axis === m.axis) {
+          const touching = end === 'end' ? Math.abs(nb.min[a] - s) <= TOUCH_MM : Math.abs(nb.max[a] - s) <= TOUCH_MM;
+          if (!touching) continue;
+          c = { kind: 'inline', other: j, otherEnd: end === 'end' ? 'start' : 'end', area: op * oq };
+        } else {
+          const b = ai(n.axis);
+          const inside = (v: number) => v >= m.drawn.min[b] - TOUCH_MM && v <= m.drawn.max[b] + TOUCH_MM;
+          const otherEnd: EndName | null = inside(nb.min[b]) ? 'start' : inside(nb.max[b]) ? 'end' : null;
+          c = { kind: otherEnd ? 'corner' : 'face', other: j, otherEnd, area: op * oq };
+        }
+        if (betterContact(c, best)) best = c;
+      }
+      return best;
+    });
+  });
+}
+
+/**
+ * Default for which member runs through where two ends meet: an upright, then the longer member, then the one
+ * listed first. Uprights running full height with rails between them is the usual way to build (common practice).
+ */
+function defaultThrough(a: MemberGeometry, b: MemberGeometry): number {
+  const ua = roleOf(a.member) === 'upright';
+  const ub = roleOf(b.member) === 'upright';
+  if (ua !== ub) return ua ? a.index : b.index;
+  const la = a.drawn.max[ai(a.axis)] - a.drawn.min[ai(a.axis)];
+  const lb = b.drawn.max[ai(b.axis)] - b.drawn.min[ai(b.axis)];
+  if (Math.abs(la - lb) > TOUCH_MM) return la > lb ? a.index : b.index;
+  return Math.min(a.index, b.index);
+}
+
+const pairKey = (a: string, b: string): string => (a < b ? `${a}|${b}` : `${b}|${a}`);
+
+/**
+ * Joints from geometry, who runs through at each, the join method, and the members' boxes once butting ends are
+ * cut back to the faces they meet (and through ends carried to the far side of a corner).
+ */
+export function findJoints(
+  doc: Pick<FrameDocument, 'joints' | 'settings'>,
+  members: readonly MemberGeometry[],
+  methods: ReadonlyMap<string, MethodDef>,
+): JointsResult {
+  const contacts = findContacts(members);
+  const throughSetting = new Map(doc.joints.map((j) => [pairKey(j.members[0], j.members[1]), j.through]));
+  const byId = new Map(members.map((m) => [m.member.id, m.index]));
+  const warnings: ReportWarning[] = [];
+  const joints: Joint[] = [];
+  const endJoint: (number | null)[][] = members.map(() => [null, null]);
+  const taken = new Set<string>();
+  const e = (end: EndName) => (end === 'start' ? 0 : 1);
+
+  const defaultJoin = fitsJoint(methods.get(doc.settings.defaultJoin)) ? doc.settings.defaultJoin : 'corner-bracket';
+  const jointMethod = (i: number, end: EndName, fallback = defaultJoin): string => {
+    const wanted = members[i].member[end]?.join;
+    if (wanted === undefined) return fallback;
+    if (fitsJoint(methods.get(wanted))) return wanted;
+    warnings.push({
+      code: 'joint-method-not-for-joints',
+      member_id: members[i].member.id,
+      message: `${members[i].member.id} ${end}: "${wanted}" is for free ends; this end butts against another member, so ${fallback} is used`,
+    });
+    return fallback;
+  };
+
+  const add = (j: Omit<Joint, 'id' | 'at'>) => {
+    const a = members[j.butting].member.id;
+    const b = members[j.other].member.id;
+    taken.add(pairKey(a, b));
+    endJoint[j.butting][e(j.buttingEnd)] = joints.length;
+    if (j.otherEnd && endJoint[j.other][e(j.otherEnd)] === null) endJoint[j.other][e(j.otherEnd)] = joints.length;
+    joints.push({ ...j, id: pairKey(a, b), at: { x: 0, y: 0, z: 0 } });
+  };
+
+  members.forEach((m, i) => {
+    for (const end of END_NAMES) {
+      const c = contacts[i][e(end)];
+      if (!c || endJoint[i][e(end)] !== null) continue;
+      const n = members[c.other];
+      const key = pairKey(m.member.id, n.member.id);
+      if (taken.has(key)) {
+        warnings.push({ code: 'end-shared', member_id: m.member.id, message: `${m.member.id} ${end}: already joined to ${n.member.id} elsewhere; this end is left free` });
+        continue;
+      }
+      const back = c.otherEnd ? contacts[c.other][e(c.otherEnd)] : null;
+      const mutual = back !== null && back.other === i && back.otherEnd === end;
+      const setting = throughSetting.get(key);
+      if (c.kind === 'inline') {
+        if (!mutual || endJoint[c.other][e(c.otherEnd as EndName)] !== null) {
+          warnings.push({ code: 'inline-one-sided', member_id: m.member.id, message: `${m.member.id} ${end}: touches the end of ${n.member.id}, which is joined elsewhere; this end is left free` });
+          continue;
+        }
+        // A splice is plated unless either end names its own method.
+        const otherEnd = c.otherEnd as EndName;
+        const method =
+          m.member[end]?.join !== undefined
+            ? jointMethod(i, end, 'gusset')
+            : n.member[otherEnd]?.join !== undefined
+              ? jointMethod(c.other, otherEnd, 'gusset')
+              : 'gusset';
+        add({ kind: 'inline', butting: i, buttingEnd: end, other: c.other, otherEnd: c.otherEnd, through: null, method });
+        continue;
+      }
+      const otherFree = c.otherEnd !== null && (back === null || mutual) && endJoint[c.other][e(c.otherEnd)] === null;
+      if (c.kind === 'corner' && otherFree) {
+        const otherEnd = c.otherEnd as EndName;
+        // Drawn overlapping, the drawing does not say who runs through; drawn touching, the end against a face butts.
+        const through = setting !== undefined ? (byId.get(setting) as number) : mutual ? defaultThrough(m, n) : c.other;
+        const butting = through === i ? c.other : i;
+        const buttingEnd = butting === i ? end : otherEnd;
+        add({
+          kind: 'corner',
+          butting,
+          buttingEnd,
+          other: through,
+          otherEnd: butting === i ? otherEnd : end,
+          through,
+          method: jointMethod(butting, buttingEnd),
+        });
+        continue;
+      }
+      // The other's end already runs through another corner here (three members at one corner): this is a
+      // corner too, with the other running through; anything else is a T.
+      const otherJoint = c.otherEnd === null ? null : endJoint[c.other][e(c.otherEnd)];
+      const corner = c.kind === 'corner' && otherJoint !== null && joints[otherJoint].through === c.other;
+      if (setting !== undefined && setting === m.member.id) {
+        warnings.push({
+          code: 'through-not-possible',
+          member_id: m.member.id,
+          message: corner
+            ? `${m.member.id} cannot run through ${n.member.id}: ${n.member.id} already runs through another member at this corner`
+            : `${m.member.id} cannot run through ${n.member.id}: it meets ${n.member.id} part-way along, so it butts`,
+        });
+      }
+      add({
+        kind: corner ? 'corner' : 'butt',
+        butting: i,
+        buttingEnd: end,
+        other: c.other,
+        otherEnd: corner ? c.otherEnd : null,
+        through: c.other,
+        method: jointMethod(i, end),
+      });
+    }
+  });
+
+  // Cut butting ends back to the face they meet; carry through ends across a corner.
+  const effective = members.map((m) => cloneBox(m.drawn));
+  for (const j of joints) {
+    if (j.kind === 'inline' || j.through === null) continue;
+    const b = members[j.butting];
+    const t = members[j.through];
+    const ba = ai(b.axis);
+    if (j.kind === 'corner') {
+      const ta = ai(t.axis);
+      const tEnd = j.otherEnd as EndName;
+      if (tEnd === 'end') effective[t.index].max[ta] = Math.max(t.drawn.max[ta], b.drawn.max[ta]);
+      else effective[t.index].min[ta] = Math.min(t.drawn.min[ta], b.drawn.min[ta]);
+    }
+    if (j.buttingEnd === 'end') effective[b.index].max[ba] = t.drawn.min[ba];
+    else effective[b.index].min[ba] = t.drawn.max[ba];
+  }
+  for (const j of joints) {
+    const a = effective[j.butting];
+    const b = effective[j.other];
+    const mid = (k: number) => (Math.max(a.min[k], b.min[k]) + Math.min(a.max[k], b.max[k])) / 2;
+    j.at = { x: mid(0), y: mid(1), z: mid(2) };
+  }
+
+  const ends = members.map((m, i) =>
+    END_NAMES.map((end): EndInfo => {
+      const k = endJoint[i][e(end)];
+      const joint = k === null ? null : joints[k];
+      const butts = joint !== null &&
+        ((joint.butting === i && joint.buttingEnd === end) || (joint.kind === 'inline' && joint.other === i && joint.otherEnd === end));
+      if (joint && butts) return { role: 'butts', joint: k, method: joint.method };
+      const wanted = m.member[end]?.join;
+      let method = 'end-cap';
+      if (wanted !== undefined) {
+        if (fitsFreeEnd(methods.get(wanted))) method = wanted;
+        else if (!joint) {
+          warnings.push({
+            code: 'free-end-with-joint-method',
+            member_id: m.member.id,
+            message: `${m.member.id} ${end}: set to join by ${wanted} but touches no other member; an end cap is listed instead`,
+          });
+        }
+      }
+      return { role: joint ? 'runs-through' : 'free', joint: k, method };
+    }) as [EndInfo, EndInfo],
+  );
+  return { joints, effective, ends, warnings };
+}

@@ -1,0 +1,212 @@
+import type { Fastener } from '../catalog/profiles';
+import type { Axis, Vec3 } from '../model/axis';
+import type { Bearing, ModuleKind } from '../model/module';
+import type { MemberRole } from '../model/member';
+import type { ToleranceClass } from '../model/settings';
+import type { FaceName } from './faces';
+import type { HardwareKind } from './hardware';
+import type { EndName, EndRole, JointKind } from './joints';
+import type { MachiningOp } from './machining';
+import type { ReportWarning } from './warnings';
+
+/**
+ * The whole report on a frame, as `calc report` prints it and the editor draws it. Field names are snake_case
+ * with units in the name; this shape is a public interface: add fields, don't rename or remove them.
+ */
+export type FrameReport = {
+  report_version: 1;
+  name: string;
+  units: { display: 'mm' | 'in'; frac: 16 | 32 };
+  settings: ReportSettings;
+  datums: { id: string; axis: Axis; value_mm: number }[];
+  bays: ReportBay[];
+  members: ReportMember[];
+  joints: ReportJoint[];
+  cut_list: CutListLine[];
+  hardware: ReportHardware;
+  modules: ReportModule[];
+  loads: ReportLoads;
+  mass: ReportMass;
+  warnings: ReportWarning[];
+  cautions: string[];
+};
+
+export type ReportSettings = {
+  kerf_mm: number;
+  machining_allowance_mm: number;
+  tolerance_class: ToleranceClass;
+  tolerance_standard: string;
+  shock_factor: number;
+  deflection_limit_n: number;
+  safety_factor: number;
+  spares_pct: number;
+  t_nut: 'slide-in' | 'drop-in';
+};
+
+export type ReportBay = {
+  id: string;
+  run_id: string;
+  /** Position in the run, from its start. */
+  index: number;
+  module_id: string | null;
+  start_mm: number;
+  end_mm: number;
+  width_mm: number;
+};
+
+export type ReportEnd = {
+  role: EndRole;
+  joint_id: string | null;
+  /** The member this end meets, if any. */
+  meets: string | null;
+  /** The join method where the end butts; the end treatment (end cap…) where it is open. */
+  method: string;
+};
+
+export type ReportMember = {
+  id: string;
+  name: string | null;
+  role: MemberRole;
+  profile: string;
+  profile_name: string;
+  axis: Axis;
+  rotation_deg: 0 | 90 | 180 | 270;
+  /** The member's box after joints (butting ends cut back to faces). */
+  min_mm: Vec3;
+  max_mm: Vec3;
+  /** Centres of its start and end faces. */
+  start_mm: Vec3;
+  end_mm: Vec3;
+  length_mm: number;
+  cut_length_mm: number;
+  allowance_start_mm: number;
+  allowance_end_mm: number;
+  tolerance_mm: number | null;
+  /** Cut length in the display unit, e.g. "760 mm" or `29 15/16"`. */
+  cut_length_text: string;
+  mark: string;
+  ends: { start: ReportEnd; end: ReportEnd };
+  ops: MachiningOp[];
+  mass_kg: number;
+};
+
+export type ReportJoint = {
+  /** The two member ids, sorted, joined by "|": stable as long as the two members exist. */
+  id: string;
+  kind: JointKind;
+  butting: { member_id: string; end: EndName };
+  other: { member_id: string; end: EndName | null };
+  runs_through: string | null;
+  method: string;
+  method_name: string;
+  at_mm: Vec3;
+};
+
+export type CutListLine = {
+  mark: string;
+  profile: string;
+  profile_name: string;
+  length_mm: number;
+  cut_length_mm: number;
+  cut_length_text: string;
+  tolerance_mm: number | null;
+  qty: number;
+  member_ids: string[];
+  ops: MachiningOp[];
+};
+
+export type ReportHardwareLine = {
+  key: string;
+  kind: HardwareKind;
+  name: string;
+  size: Fastener | null;
+  length_mm: number | null;
+  count: number;
+  order_qty: number;
+  unit_mass_g: number;
+};
+
+export type TNutOrder = {
+  member_id: string;
+  mark: string;
+  face: FaceName;
+  slot: number;
+  count: number;
+  closed_by: [string, string];
+  for: string[];
+  message: string;
+};
+
+export type ReportHardware = {
+  lines: ReportHardwareLine[];
+  spares_pct: number;
+  mass_kg: number;
+  mass_approximate: true;
+  t_nut_order: TNutOrder[];
+};
+
+export type ReportModule = {
+  id: string;
+  name: string | null;
+  kind: ModuleKind;
+  bay_id: string | null;
+  mass_kg: number;
+  min_mm: Vec3;
+  max_mm: Vec3;
+  bearing: Bearing;
+  bears_on: { member_id: string; face: FaceName; from_mm: number; to_mm: number }[];
+};
+
+export type ReportSpan = {
+  from_mm: number;
+  to_mm: number;
+  span_mm: number;
+  support: 'simple' | 'cantilever';
+  deflection_mm: number;
+  deflection_fixed_mm: number | null;
+  limit_mm: number;
+  moment_Nmm: number;
+  moment_fixed_Nmm: number | null;
+  stress_MPa: number;
+  allowable_MPa: number;
+  utilisation: number;
+};
+
+export type ReportMemberCheck = {
+  member_id: string;
+  mark: string;
+  load_N: number;
+  bending_axis: 'x' | 'y';
+  I_mm4: number;
+  W_mm3: number;
+  E_MPa: number;
+  spans: ReportSpan[];
+  utilisation: number | null;
+  governing: 'deflection' | 'stress' | null;
+};
+
+export type ReportLoads = {
+  g_m_s2: number;
+  shock_factor: number;
+  shock_factor_note: string;
+  deflection_limit_n: number;
+  deflection_note: string;
+  safety_factor: number;
+  safety_factor_note: string;
+  modules: { module_id: string; weight_N: number; factored_N: number; members: number }[];
+  members: ReportMemberCheck[];
+  uprights: { member_id: string; axial_N: number }[];
+  max_utilisation: number | null;
+  governing_member_id: string | null;
+};
+
+export type ReportMass = {
+  frame_kg: number;
+  hardware_kg: number;
+  hardware_approximate: true;
+  modules_kg: number;
+  total_kg: number;
+  cog_mm: Vec3 | null;
+  frame_cog_mm: Vec3 | null;
+  by_profile: { profile: string; length_mm: number; mass_kg: number }[];
+};

@@ -1,0 +1,293 @@
+import { InputError } from '../errors';
+import { formatLength, STANDARD_GRAVITY } from '../geometry/units';
+import { type Axis, type Vec3 } from '../model/axis';
+import type { FrameDocument } from '../model/frame-document';
+import { roleOf } from '../model/member';
+import { checkReferences } from '../model/references';
+import { findBearings } from './bearing';
+import { ai, type Box } from './box';
+import { CAUTIONS, DEFLECTION_NOTE, SAFETY_FACTOR_NOTE, SHOCK_FACTOR_NOTE } from './cautions';
+import { cutList } from './cut-list';
+import { hardwareList } from './hardware';
+import { methodTable } from './join-methods';
+import { END_NAMES, findJoints, type EndName } from './joints';
+import { memberLengths } from './lengths';
+import { checkLoads } from './loads';
+import { machiningOps, type MachiningOp } from './machining';
+import { massAndCentre } from './mass';
+import type { MarkHint } from './part-marks';
+import { profileTable } from './profile-table';
+import type { FrameReport, ReportEnd, ReportMember } from './report-types';
+import { resolveDatums } from './resolve-datums';
+import { resolveMembers } from './resolve-members';
+import { resolveModules } from './resolve-modules';
+import { TOLERANCE_CLASS_NAMES } from './tolerance';
+
+export type { FrameReport } from './report-types';
+
+export type ReportOptions = {
+  /** The report before this change (or just its members), so part marks carry over to the same parts. */
+  previous?: { members: ReadonlyArray<Pick<ReportMember, 'id' | 'mark' | 'cut_length_mm'>> };
+};
+
+const round = (v: number, digits: number): number => {
+  const f = 10 ** digits;
+  const r = Math.round(v * f) / f;
+  return Object.is(r, -0) ? 0 : r;
+};
+const mm = (v: number) => round(v, 4);
+const vec = (v: Vec3, d = 4): Vec3 => ({ x: round(v.x, d), y: round(v.y, d), z: round(v.z, d) });
+const boxMin = (b: Box): Vec3 => vec({ x: b.min[0], y: b.min[1], z: b.min[2] });
+const boxMax = (b: Box): Vec3 => vec({ x: b.max[0], y: b.max[1], z: b.max[2] });
+
+function faceCentre(b: Box, axis: Axis, end: EndName): Vec3 {
+  const c = { x: (b.min[0] + b.max[0]) / 2, y: (b.min[1] + b.max[1]) / 2, z: (b.min[2] + b.max[2]) / 2 };
+  c[axis] = end === 'start' ? b.min[ai(axis)] : b.max[ai(axis)];
+  return vec(c);
+}
+
+const roundOp = (op: MachiningOp): MachiningOp => (op.kind === 'access-hole' ? { ...op, at_mm: mm(op.at_mm) } : op);
+
+/**
+ * The whole report on a frame document in one pure call: resolved datums and members, joints, cut lengths,
+ * the cut list with part marks, machining, hardware and T-nut order, module loads and beam checks, mass and
+ * centre of gravity, warnings and cautions. Throws InputError (naming the field) for a document that cannot be
+ * resolved: a dangling reference, a cycle of datums or member faces, a member of no length.
+ */
+export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): FrameReport {
+  checkReferences(doc);
+  const profileOf = profileTable(doc);
+  const methods = methodTable(doc);
+  const datums = resolveDatums(doc);
+  const members = resolveMembers(doc, datums, profileOf);
+  const joints = findJoints(doc, members, methods);
+  const lengths = memberLengths(doc, members, joints);
+  lengths.forEach((l, i) => {
+    if (!(l.length_mm > 0.05) || !(l.cut_length_mm > 0.05)) {
+      throw new InputError(
+        `members[${i}]`,
+        `members[${i}]: member "${members[i].member.id}" is cut back to ${mm(l.length_mm)} mm by the members it meets; move its ends or theirs`,
+      );
+    }
+  });
+  const eff = joints.effective;
+  const modules = resolveModules(doc, datums, members, (m) => eff[m.index]);
+  const ops = machiningOps(members, joints, methods);
+
+  const hints = new Map<string, MarkHint>();
+  for (const p of opts.previous?.members ?? []) hints.set(p.id, { mark: p.mark, pinned: false, cut_length_mm: p.cut_length_mm });
+  for (const m of doc.members) if (m.mark !== undefined) hints.set(m.id, { mark: m.mark, pinned: true });
+  const cuts = cutList(members, lengths, ops, hints);
+
+  const { bearings, warnings: bearingWarnings } = findBearings(modules, members, eff);
+  const hardware = hardwareList(doc, members, joints, methods, modules, bearings);
+  const loads = checkLoads(doc, members, modules, bearings, joints);
+  const mass = massAndCentre(members, lengths, eff, modules, hardware);
+
+  const { display, frac } = doc.units;
+  const text = (v: number) => formatLength(v, display, frac);
+  const idOf = (i: number) => members[i].member.id;
+
+  const reportMembers: ReportMember[] = members.map((g, i) => {
+    const m = g.member;
+    const ends = END_NAMES.map((end, k): ReportEnd => {
+      const e = joints.ends[i][k];
+      const j = e.joint === null ? null : joints.joints[e.joint];
+      const meets = j === null ? null : idOf(j.butting === i ? j.other : j.butting);
+      return { role: e.role, joint_id: j?.id ?? null, meets, method: e.method };
+    });
+    const l = lengths[i];
+    return {
+      id: m.id,
+      name: m.name ?? null,
+      role: roleOf(m),
+      profile: m.profile,
+      profile_name: g.info.name,
+      axis: m.axis,
+      rotation_deg: m.rotation_deg,
+      min_mm: boxMin(eff[i]),
+      max_mm: boxMax(eff[i]),
+      start_mm: faceCentre(eff[i], m.axis, 'start'),
+      end_mm: faceCentre(eff[i], m.axis, 'end'),
+      length_mm: mm(l.length_mm),
+      cut_length_mm: mm(l.cut_length_mm),
+      allowance_start_mm: l.allowance_start_mm,
+      allowance_end_mm: l.allowance_end_mm,
+      tolerance_mm: l.tolerance_mm,
+      cut_length_text: text(l.cut_length_mm),
+      mark: cuts.markOf[i],
+      ends: { start: ends[0], end: ends[1] },
+      ops: ops[i].map(roundOp),
+      mass_kg: round(mass.member_kg[i], 5),
+    };
+  });
+
+  const tNutOrder = hardware.slotOrder.map((s) => {
+    const id = idOf(s.member);
+    const nuts = s.count === 1 ? '1 T-nut' : `${s.count} T-nuts`;
+    return {
+      member_id: id,
+      mark: cuts.markOf[s.member],
+      face: s.face,
+      slot: s.slot,
+      count: s.count,
+      closed_by: s.closed_by,
+      for: s.for,
+      message: `${id} (part ${cuts.markOf[s.member]}), ${s.face} face, slot ${s.slot}: both ends are closed by ${s.closed_by[0]} and ${s.closed_by[1]}; slide in ${nuts} before fitting them, or use drop-in T-nuts`,
+    };
+  });
+
+  const checks = loads.checks.map((c) => ({
+    member_id: idOf(c.member),
+    mark: cuts.markOf[c.member],
+    load_N: round(c.load_N, 3),
+    bending_axis: c.bending_axis,
+    I_mm4: round(c.I_mm4, 1),
+    W_mm3: round(c.W_mm3, 1),
+    E_MPa: c.E_MPa,
+    spans: c.spans.map((s) => ({
+      from_mm: mm(s.from_mm),
+      to_mm: mm(s.to_mm),
+      span_mm: mm(s.span_mm),
+      support: s.support,
+      deflection_mm: round(s.deflection_mm, 5),
+      deflection_fixed_mm: s.deflection_fixed_mm === null ? null : round(s.deflection_fixed_mm, 5),
+      limit_mm: round(s.limit_mm, 4),
+      moment_Nmm: round(s.moment_Nmm, 1),
+      moment_fixed_Nmm: s.moment_fixed_Nmm === null ? null : round(s.moment_fixed_Nmm, 1),
+      stress_MPa: round(s.stress_MPa, 4),
+      allowable_MPa: round(s.allowable_MPa, 4),
+      utilisation: round(s.utilisation, 5),
+    })),
+    utilisation: c.utilisation === null ? null : round(c.utilisation, 5),
+    governing: c.governing,
+  }));
+  let governing: (typeof checks)[number] | null = null;
+  for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > (governing.utilisation as number))) governing = c;
+
+  const warnings = [...joints.warnings, ...bearingWarnings, ...hardware.warnings, ...loads.warnings];
+  for (const c of checks) {
+    if (c.utilisation !== null && c.utilisation > 1) {
+      warnings.push({
+        code: 'over-utilised',
+        member_id: c.member_id,
+        message: `${c.member_id} (part ${c.mark}) is at ${Math.round(c.utilisation * 100)} % of its ${c.governing} limit: use a stiffer profile, shorten the span or add a support`,
+      });
+    }
+  }
+  for (const t of tNutOrder) warnings.push({ code: 'slot-closed', member_id: t.member_id, message: t.message });
+
+  const byProfile = new Map<string, { profile: string; length_mm: number; mass_kg: number }>();
+  members.forEach((g, i) => {
+    const p = byProfile.get(g.member.profile) ?? { profile: g.member.profile, length_mm: 0, mass_kg: 0 };
+    p.length_mm += lengths[i].length_mm;
+    p.mass_kg += mass.member_kg[i];
+    byProfile.set(g.member.profile, p);
+  });
+
+  const s = doc.settings;
+  return {
+    report_version: 1,
+    name: doc.name,
+    units: { display, frac },
+    settings: {
+      kerf_mm: s.kerf_mm,
+      machining_allowance_mm: s.machiningAllowance_mm,
+      tolerance_class: s.toleranceClass,
+      tolerance_standard: TOLERANCE_CLASS_NAMES[s.toleranceClass],
+      shock_factor: s.shockFactor,
+      deflection_limit_n: s.deflectionLimitN,
+      safety_factor: s.safetyFactor,
+      spares_pct: s.sparesPct,
+      t_nut: s.tNut,
+    },
+    datums: [...datums.values.entries()]
+      .map(([id, v]) => ({ id, axis: datums.axes.get(id) as Axis, value_mm: mm(v) }))
+      .sort((p, q) => (p.id < q.id ? -1 : p.id > q.id ? 1 : 0)),
+    bays: [...datums.bays.values()].map((b) => ({
+      id: b.bay.id,
+      run_id: b.run.id,
+      index: b.index,
+      module_id: b.bay.module ?? null,
+      start_mm: mm(b.start_mm),
+      end_mm: mm(b.end_mm),
+      width_mm: mm(b.width_mm),
+    })),
+    members: reportMembers,
+    joints: joints.joints.map((j) => ({
+      id: j.id,
+      kind: j.kind,
+      butting: { member_id: idOf(j.butting), end: j.buttingEnd },
+      other: { member_id: idOf(j.other), end: j.otherEnd },
+      runs_through: j.through === null ? null : idOf(j.through),
+      method: j.method,
+      method_name: methods.get(j.method)?.name ?? j.method,
+      at_mm: vec(j.at),
+    })),
+    cut_list: cuts.groups.map((g) => ({
+      mark: g.mark,
+      profile: g.profile,
+      profile_name: members[g.members[0]].info.name,
+      length_mm: mm(g.length_mm),
+      cut_length_mm: mm(g.cut_length_mm),
+      cut_length_text: text(g.cut_length_mm),
+      tolerance_mm: g.tolerance_mm,
+      qty: g.members.length,
+      member_ids: g.members.map(idOf),
+      ops: g.ops.map(roundOp),
+    })),
+    hardware: {
+      lines: hardware.lines.map((l) => ({ ...l, length_mm: l.length_mm === null ? null : mm(l.length_mm), unit_mass_g: round(l.unit_mass_g, 2) })),
+      spares_pct: s.sparesPct,
+      mass_kg: round(hardware.mass_kg, 5),
+      mass_approximate: true,
+      t_nut_order: tNutOrder,
+    },
+    modules: modules.map((g, k) => ({
+      id: g.module.id,
+      name: g.module.name ?? null,
+      kind: g.module.kind,
+      bay_id: g.bay,
+      mass_kg: round(g.mass_kg, 5),
+      min_mm: boxMin(g.box),
+      max_mm: boxMax(g.box),
+      bearing: g.module.bearing,
+      bears_on: bearings[k].contacts.map((c) => ({ member_id: idOf(c.member), face: c.face, from_mm: mm(c.from_mm), to_mm: mm(c.to_mm) })),
+    })),
+    loads: {
+      g_m_s2: STANDARD_GRAVITY,
+      shock_factor: s.shockFactor,
+      shock_factor_note: SHOCK_FACTOR_NOTE,
+      deflection_limit_n: s.deflectionLimitN,
+      deflection_note: DEFLECTION_NOTE,
+      safety_factor: s.safetyFactor,
+      safety_factor_note: SAFETY_FACTOR_NOTE,
+      modules: loads.modules.map((l) => ({
+        module_id: modules[l.module].module.id,
+        weight_N: round(l.weight_N, 3),
+        factored_N: round(l.factored_N, 3),
+        members: l.contacts,
+      })),
+      members: checks,
+      uprights: members
+        .filter((g) => g.axis === 'z' && loads.axial_N[g.index] > 1e-9)
+        .map((g) => ({ member_id: g.member.id, axial_N: round(loads.axial_N[g.index], 3) })),
+      max_utilisation: governing?.utilisation ?? null,
+      governing_member_id: governing?.member_id ?? null,
+    },
+    mass: {
+      frame_kg: round(mass.frame_kg, 5),
+      hardware_kg: round(mass.hardware_kg, 5),
+      hardware_approximate: true,
+      modules_kg: round(mass.modules_kg, 5),
+      total_kg: round(mass.total_kg, 5),
+      cog_mm: mass.cog ? vec(mass.cog, 1) : null,
+      frame_cog_mm: mass.frame_cog ? vec(mass.frame_cog, 1) : null,
+      by_profile: [...byProfile.values()]
+        .sort((p, q) => (p.profile < q.profile ? -1 : 1))
+        .map((p) => ({ profile: p.profile, length_mm: mm(p.length_mm), mass_kg: round(p.mass_kg, 5) })),
+    },
+    warnings,
+    cautions: [...CAUTIONS],
+  };
+}

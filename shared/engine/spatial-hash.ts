@@ -1,0 +1,56 @@
+import type { Box } from './box';
+
+const OFFSET = 65_536; // cells either side of the origin: ±6.5 km at 100 mm cells
+const SPAN = 131_072;
+
+/**
+ * A uniform grid over boxes, so finding what touches a member's end looks at the few members near it rather than
+ * every member (n ends × k neighbours instead of n²).
+ */
+export class SpatialHash {
+  private readonly cells = new Map<number, number[]>();
+  private readonly stamp: Uint32Array;
+  private round = 0;
+
+  constructor(
+    private readonly cell: number,
+    count: number,
+  ) {
+    this.stamp = new Uint32Array(count);
+  }
+
+  private range(lo: number, hi: number): [number, number] {
+    return [Math.floor(lo / this.cell) + OFFSET, Math.floor(hi / this.cell) + OFFSET];
+  }
+
+  private each(box: Box, fn: (key: number) => void): void {
+    const [x0, x1] = this.range(box.min[0], box.max[0]);
+    const [y0, y1] = this.range(box.min[1], box.max[1]);
+    const [z0, z1] = this.range(box.min[2], box.max[2]);
+    for (let x = x0; x <= x1; x++) for (let y = y0; y <= y1; y++) for (let z = z0; z <= z1; z++) fn((x * SPAN + y) * SPAN + z);
+  }
+
+  insert(id: number, box: Box): void {
+    this.each(box, (key) => {
+      const list = this.cells.get(key);
+      if (list) list.push(id);
+      else this.cells.set(key, [id]);
+    });
+  }
+
+  /** Ids of boxes sharing a cell with `box`, each once, in ascending order. */
+  query(box: Box): number[] {
+    this.round += 1;
+    const out: number[] = [];
+    this.each(box, (key) => {
+      const list = this.cells.get(key);
+      if (!list) return;
+      for (const id of list) {
+        if (this.stamp[id] === this.round) continue;
+        this.stamp[id] = this.round;
+        out.push(id);
+      }
+    });
+    return out.sort((a, b) => a - b);
+  }
+}

@@ -1,0 +1,18 @@
+/** Something the builder should look at; never fatal. Codes are stable, messages are for people. */
+export type ReportWarning = {
+  code:
+    | 'free-end-with-joint-method'
+    | 'joint-method-not-for-joints'
+    | 'through-not-possible'
+    | 'inline-one-sided'
+    | 'end-shared'
+    | 'plain-section-fastener'
+    | 'module-unsupported'
+    | 'member-unsupported'
+    | 'load-cycle'
+    | 'over-utilised'
+    | 'slot-closed';
+  message: string;
+  member_id?: string;
+  module_id?: string;
+};

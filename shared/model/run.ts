@@ -1,0 +1,51 @@
+import { z } from 'zod';
+import { axisSchema } from './axis';
+import { idSchema, nameSchema } from './ids';
+import { positionSchema } from './position';
+
+/**
+ * One opening of a run. With a module its width is the module's size along the run plus a clearance each side;
+ * an open bay (no module) or a fixed-width bay gives `width_mm`.
+ */
+export const baySchema = z
+  .strictObject({
+    id: idSchema,
+    name: nameSchema.optional(),
+    module: idSchema.optional(),
+    width_mm: z.number().positive('must be more than 0').optional(),
+    clearance_mm: z.number().nonnegative('must not be negative').optional(),
+  })
+  .superRefine((b, ctx) => {
+    if (b.module === undefined && b.width_mm === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['width_mm'], message: 'an open bay needs a width (or give it a module)' });
+    }
+  });
+export type Bay = z.output<typeof baySchema>;
+
+/**
+ * A row of bays along one axis, bounded by uprights `upright_mm` thick (their size along the run). The run
+ * generates datums, which members and other datums refer to:
+ * - `<run>.u<k>` the near face of the k-th upright (k = 0 … number of bays), `<run>.end` the far face of the last;
+ * - `<bay>.start`, `<bay>.end`, `<bay>.mid` the bay's opening, which travel with the bay when bays are reordered.
+ * Swapping modules reorders `bays`; resizing changes a module's size. Neither touches a member record.
+ */
+export const runSchema = z.strictObject({
+  type: z.literal('run'),
+  id: idSchema,
+  name: nameSchema.optional(),
+  axis: axisSchema.default('x'),
+  start: positionSchema.prefault({}),
+  upright_mm: z.number().nonnegative('must not be negative'),
+  clearance_mm: z.number().nonnegative('must not be negative').default(0),
+  bays: z.array(baySchema).min(1, 'a run needs at least one bay'),
+});
+export type Run = z.output<typeof runSchema>;
+export type RunInput = z.input<typeof runSchema>;
+
+/** Datum ids a run generates, in order along the run (see runSchema). */
+export function runDatumIds(run: Pick<Run, 'id' | 'bays'>): string[] {
+  const ids: string[] = [];
+  run.bays.forEach((bay, k) => ids.push(`${run.id}.u${k}`, `${bay.id}.start`, `${bay.id}.mid`, `${bay.id}.end`));
+  ids.push(`${run.id}.u${run.bays.length}`, `${run.id}.end`);
+  return ids;
+}

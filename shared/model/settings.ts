@@ -1,0 +1,41 @@
+import { z } from 'zod';
+import { ALLOY_IDS, type AlloyId } from '../catalog/alloys';
+
+/** ISO 2768-1 general tolerance classes: fine, medium, coarse, very coarse. */
+export const toleranceClassSchema = z.enum(['f', 'm', 'c', 'v']);
+export type ToleranceClass = z.infer<typeof toleranceClassSchema>;
+
+/**
+ * Defaults, and why:
+ * - kerf 3 mm: a non-ferrous carbide blade cuts about 2.5–3.2 mm (common practice, REFERENCES.md).
+ * - machining allowance 0: parts cut on a good saw are used as cut; set e.g. 0.5 mm per end to face them square.
+ * - tolerance class m: ISO 2768-1 "medium", what a drawing assumes when it names none.
+ * - shock factor 2.5: fittings in a van see 2–3 g vertical over bumps; no published value, common practice (and
+ *   recalled, not confirmed: REFERENCES.md marks it [CP][M]). Use 1 for a bench that never moves.
+ * - deflection limit span/240: IBC Table 1604.3 allows L/240 under total (dead + live) load on floors; our check
+ *   already includes the shock factor, so under the static load alone the limit is about L/600, well inside the
+ *   visible-sag rule of thumb of L/384 (common practice, REFERENCES.md).
+ * - safety factor 1.65 on the alloy's design-minimum yield: the Aluminum Design Manual's allowable-stress factor
+ *   for yielding in building-type structures (recalled from memory, not confirmed against the manual).
+ * - spares 10 %: small hardware gets lost or a nut is forgotten in a closed slot; common practice, no source.
+ * - T-nuts slide-in: cheaper and stronger than drop-in ones; the report warns where one must go in early.
+ */
+export const settingsSchema = z.strictObject({
+  kerf_mm: z.number().nonnegative('must not be negative').max(20, 'must be at most 20 mm').default(3),
+  machiningAllowance_mm: z.number().min(-10, 'must be at least -10 mm').max(20, 'must be at most 20 mm').default(0),
+  toleranceClass: toleranceClassSchema.default('m'),
+  shockFactor: z.number().min(1, 'must be at least 1 (the static load)').max(20, 'must be at most 20').default(2.5),
+  deflectionLimitN: z.number().min(10, 'must be at least 10').max(5000, 'must be at most 5000').default(240),
+  safetyFactor: z.number().min(1, 'must be at least 1').max(10, 'must be at most 10').default(1.65),
+  sparesPct: z.number().min(0, 'must not be negative').max(100, 'must be at most 100').default(10),
+  alloy: z.enum(ALLOY_IDS as [AlloyId, ...AlloyId[]]).optional(),
+  tNut: z.enum(['slide-in', 'drop-in']).default('slide-in'),
+  defaultJoin: z.string().min(1).max(64).default('corner-bracket'),
+});
+export type FrameSettings = z.output<typeof settingsSchema>;
+
+export const displayUnitsSchema = z.strictObject({
+  display: z.enum(['mm', 'in']).default('mm'),
+  frac: z.union([z.literal(16), z.literal(32)]).default(16),
+});
+export type DisplayUnits = z.output<typeof displayUnitsSchema>;
