@@ -1,0 +1,47 @@
+import Papa from 'papaparse';
+import { lengthText, opShort } from './format';
+import type { OrderList, ShopCutList, ShopUnits } from './types';
+
+/**
+ * Cells a spreadsheet would read as a formula: a leading = + - @, tab or carriage return (OWASP "CSV Injection"),
+ * and their full-width forms, which some spreadsheets treat the same. Leading spaces do not make a cell safe.
+ */
+const FORMULA_START = /^[\s]*[=+\-@\t\r\uFF1D\uFF0B\uFF0D\uFF20]/;
+
+export type CsvCell = string | number | null;
+
+/**
+ * CSV text (RFC 4180, CRLF) with formula-looking text cells prefixed by a single quote and quoted, as OWASP advises;
+ * numbers are written as numbers (a negative number is data, not a formula). Starts with a byte-order mark so
+ * spreadsheets read the UTF-8 (×, ±, Ø) correctly.
+ */
+export function toCsv(rows: readonly (readonly CsvCell[])[]): string {
+  return '\uFEFF' + Papa.unparse(rows as CsvCell[][], { escapeFormulae: FORMULA_START, newline: '\r\n' }) + '\r\n';
+}
+
+/** The cut list grouped by profile and part mark: one row per mark. */
+export function cutListCsv(cutList: ShopCutList, units: ShopUnits): string {
+  const rows: CsvCell[][] = [['Profile', 'Part mark', 'Quantity', 'Cut length (mm)', 'Cut length', 'Tolerance (± mm)', 'Machining', 'Members']];
+  for (const p of cutList.parts) {
+    rows.push([
+      p.profileName,
+      p.mark,
+      p.qty,
+      p.cutLength_mm,
+      lengthText(p.cutLength_mm, units),
+      p.tolerance_mm,
+      p.ops.map((op) => opShort(op, units)).join('; '),
+      p.members.join('; '),
+    ]);
+  }
+  return toCsv(rows);
+}
+
+/** The order list: stock bars, then the cut-to-length alternative. */
+export function orderListCsv(order: OrderList): string {
+  const rows: CsvCell[][] = [['Buy as', 'Profile', 'Length (mm)', 'Quantity', `Unit price (${order.currency})`, `Cost (${order.currency})`, 'Part marks']];
+  for (const l of order.stock) rows.push(['stock bar', l.profileName, l.length_mm, l.qty, l.unitPrice, l.cost, '']);
+  for (const l of order.cutToLength) rows.push(['cut to length', l.profileName, l.length_mm, l.qty, null, null, l.marks.join(' ')]);
+  rows.push(['cutting fee', '', null, order.cutCount, order.feePerCut, order.feePerCut === null ? null : Math.round(order.feePerCut * order.cutCount * 100) / 100, '']);
+  return toCsv(rows);
+}

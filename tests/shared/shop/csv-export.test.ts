@@ -1,0 +1,52 @@
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { cutListCsv, orderListCsv, toCsv } from '@shared/shop/csv-export';
+import { orderList } from '@shared/shop/order-list';
+import { cutList, plans } from './fixtures';
+
+const cells = (csv: string): string[][] => Papa.parse<string[]>(csv.replace(/^\uFEFF/, ''), { skipEmptyLines: true }).data;
+
+describe('CSV export', () => {
+  // OWASP "CSV Injection": cells beginning with = + - @ tab or carriage return are prefixed with ' and quoted.
+  it.each(['=1+2', '+SUM(A1)', '-2+3', '@cmd', '\t=1', '\r=1', '=HYPERLINK("http://x")\nsecond line', '  =1', '＝1'])('escapes %j', (v) => {
+    const [row] = cells(toCsv([[v]]));
+    expect(row[0].startsWith("'")).toBe(true);
+    expect(row[0].slice(1)).toBe(v);
+  });
+
+  it('leaves ordinary text and numbers alone, negative numbers included', () => {
+    const [row] = cells(toCsv([['40×40 slot 8', 1120, -3, 'rail, front']]));
+    expect(row).toEqual(['40×40 slot 8', '1120', '-3', 'rail, front']);
+  });
+
+  it('starts with a byte-order mark and ends rows with CRLF (RFC 4180)', () => {
+    const csv = toCsv([['a', 'b'], ['c', 'd']]);
+    expect(csv.charCodeAt(0)).toBe(0xfeff);
+    expect(csv.slice(1)).toBe('a,b\r\nc,d\r\n');
+  });
+
+  it('writes one row per part mark with the cut length in mm and in the display unit', () => {
+    const rows = cells(cutListCsv(cutList, { display: 'in', frac: 16 }));
+    expect(rows[0][1]).toBe('Part mark');
+    expect(rows.slice(1).map((r) => r[1])).toEqual(['A', 'B', 'C', 'D']);
+    const b = rows.find((r) => r[1] === 'B')!;
+    expect(b[2]).toBe('4');
+    expect(b[3]).toBe('1120');
+    // 1120 / 25.4 = 44.094 in → nearest 1/16 is 44 2/16 = 44 1/8 (25.4 mm per inch exactly, NIST)
+    expect(b[4]).toBe('44 1/8"');
+  });
+
+  it('escapes a member name that looks like a formula', () => {
+    const evil = { ...cutList, parts: [{ ...cutList.parts[0], members: ['=cmd|" /C calc"!A0'] }] };
+    const rows = cells(cutListCsv(evil, { display: 'mm', frac: 16 }));
+    expect(rows[1][7].startsWith("'=")).toBe(true);
+  });
+
+  it('writes the order list with stock bars and the cut-to-length lines', () => {
+    const order = orderList(plans, cutList, 'EUR', { feePerCut: 1.5, pricePerMetre: {} });
+    const rows = cells(orderListCsv(order));
+    expect(rows[1]).toEqual(['stock bar', '40×40 slot 8', '6000', '2', '42', '84', '']);
+    expect(rows.filter((r) => r[0] === 'cut to length').length).toBe(4);
+    expect(rows.at(-1)).toEqual(['cutting fee', '', '', '14', '1.5', '21', '']);
+  });
+});
