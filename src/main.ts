@@ -1,5 +1,7 @@
 import { createApp } from 'vue';
 import { createPinia } from 'pinia';
+// Vuetify's styles first: they declare the cascade layers the app's own CSS slots into.
+import { vuetify } from './plugins/vuetify';
 import '@fontsource/barlow/400.css';
 import '@fontsource/barlow/500.css';
 import '@fontsource/barlow/600.css';
@@ -7,7 +9,6 @@ import '@fontsource/barlow/700.css';
 import App from './App.vue';
 import { apiKey, createApi } from './api';
 import { createHttp } from './api/http';
-import { vuetify } from './plugins/vuetify';
 import { createAppRouter } from './router';
 import { useSessionStore } from './stores/session';
 

@@ -11,10 +11,10 @@ export const ACTION_WORDS: Readonly<Record<Action, string>> = {
   read: 'see this workshop’s projects',
 };
 
-/** Chip colours: owners and designers in the accent family, shop and client roles in greys. */
+/** Chip colours: owners and designers in the accent family, the shop in graphite, the client in steel blue. */
 export const ROLE_COLORS: Readonly<Record<Role, string>> = {
   owner: 'primary',
   designer: 'primary-darken-1',
   cutter: 'secondary',
-  viewer: 'muted',
+  viewer: 'info',
 };

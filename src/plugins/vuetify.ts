@@ -55,7 +55,7 @@ export const vuetify = createVuetify({
     VTextField: field,
     VTextarea: { ...field, rows: 3, autoGrow: true },
     VSelect: field,
-    VDataTable: { density: 'comfortable', hover: true, itemsPerPage: 25 },
+    VDataTable: { density: 'comfortable', hover: true, itemsPerPage: 25, mobileBreakpoint: 'sm' },
     VDialog: { maxWidth: 520 },
     VAlert: { variant: 'tonal', density: 'comfortable', border: 'start' },
     VChip: { size: 'small', variant: 'tonal', label: true },

@@ -28,7 +28,7 @@ describe('a designer renames a frame', () => {
     expect(newName).not.toBe(before);
 
     await page.reload();
-    await page.getByRole('heading', { level: 1 }).waitFor();
+    await page.getByRole('button', { name: 'Rename frame' }).waitFor();
     expect(page.url()).toBe(frameUrl);
     expect(await page.getByRole('heading', { level: 1 }).innerText()).toBe(newName);
 
@@ -38,9 +38,9 @@ describe('a designer renames a frame', () => {
   });
 
   it('shows an empty name as a field error and saves nothing', async () => {
-    const current = await page.getByRole('list', { name: 'Frames' }).getByRole('link').first();
-    await current.click();
+    await page.getByRole('list', { name: 'Frames' }).getByRole('link').first().click();
     await page.waitForURL(/\/frames\/[0-9a-f-]+$/);
+    await page.getByRole('button', { name: 'Rename frame' }).waitFor();
     const name = await page.getByRole('heading', { level: 1 }).innerText();
 
     await page.getByRole('button', { name: 'Rename frame' }).click();
@@ -50,6 +50,7 @@ describe('a designer renames a frame', () => {
     await page.getByRole('button', { name: 'Cancel' }).click();
 
     await page.reload();
+    await page.getByRole('button', { name: 'Rename frame' }).waitFor();
     expect(await page.getByRole('heading', { level: 1 }).innerText()).toBe(name);
   });
 });

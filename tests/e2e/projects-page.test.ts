@@ -21,9 +21,10 @@ describe('the projects page', () => {
     await page.evaluate(() => document.fonts.ready);
     await page.screenshot({ path: screenshotPath('projects-page.png'), fullPage: true });
 
-    await page.getByLabel('Search projects').fill('no such project zz');
+    const search = page.getByRole('textbox', { name: 'Search projects' });
+    await search.fill('no such project zz');
     await page.getByText('No project matches that search.').waitFor();
-    await page.getByLabel('Search projects').fill('kitchen');
+    await search.fill('kitchen');
     await table.getByRole('link', { name: DEMO_PROJECT }).waitFor();
   });
 

@@ -47,7 +47,7 @@ describe('a viewer (the client) reads without changing', () => {
   it('is told plainly that the members page is for owners', async () => {
     const workshopId = new URL(page.url()).pathname.split('/')[2];
     await page.goto(`/w/${workshopId}/members`);
-    await page.getByRole('heading', { name: 'Not allowed' }).waitFor();
+    await page.getByRole('heading', { name: 'Not allowed', level: 1 }).waitFor();
     await page.getByText('Your role in this workshop is Viewer (client)').waitFor();
   });
 });

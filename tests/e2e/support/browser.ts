@@ -58,6 +58,8 @@ export async function openDemoFrame(page: Page): Promise<string> {
   await page.getByRole('heading', { name: DEMO_PROJECT, level: 1 }).waitFor();
   await page.getByRole('list', { name: 'Frames' }).getByRole('link').first().click();
   await page.waitForURL(/\/frames\/[0-9a-f-]+$/);
+  // The facts card appears with the loaded frame, and the page title with it.
+  await page.getByText('Saved versions').waitFor();
   await page.getByRole('heading', { level: 1 }).waitFor();
   return page.url();
 }
