@@ -1,0 +1,50 @@
+// `npm run bench:cut [-- --quick] [--time-limit MS] [--set NAME ...] [--out FILE.tsv]`
+// Runs the stock planner on the classic one-dimensional bin-packing benchmark in ../shared/bench/bpp (read in place;
+// its licence forbids copies) and prints, per set: instances at the known optimum, gaps, times, and the same for plain
+// first fit decreasing. Sequential on purpose: the machine is shared.
+import { writeFileSync } from 'node:fs';
+import { benchAvailable, benchDir, loadInstances } from './bench-cut/instances';
+import { runInstance, type InstanceResult } from './bench-cut/run-instance';
+import { summarise, formatSummary } from './bench-cut/summary';
+
+function parseArgs(argv: string[]) {
+  const out = { quick: false, timeLimitMs: 5000, sets: [] as string[], file: '' };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === '--quick') out.quick = true;
+    else if (a === '--time-limit') out.timeLimitMs = Number(argv[++i]);
+    else if (a === '--set') out.sets.push(argv[++i]);
+    else if (a === '--out') out.file = argv[++i];
+    else throw new Error(`unknown argument ${a}`);
+  }
+  return out;
+}
+
+const args = parseArgs(process.argv.slice(2));
+if (!benchAvailable()) {
+  console.error(`bench:cut: the benchmark instances are not present at ${benchDir}`);
+  process.exit(1);
+}
+const instances = loadInstances({ quick: args.quick, sets: args.sets.length ? args.sets : undefined });
+console.log(`${instances.length} instances, improvement time limit ${args.timeLimitMs} ms each`);
+const results: InstanceResult[] = [];
+const t0 = performance.now();
+for (const ins of instances) {
+  const r = runInstance(ins, args.timeLimitMs);
+  results.push(r);
+  if (!r.feasible || r.lowerBound > r.optimum || r.bars !== r.optimum) {
+    const why = !r.feasible ? 'INFEASIBLE PLAN' : r.lowerBound > r.optimum ? 'INVALID BOUND' : 'above optimum';
+    console.log(`  ${r.name}: ${why} (bars ${r.bars}, optimum ${r.optimum}, bound ${r.lowerBound}, ${r.ms.toFixed(0)} ms)`);
+  }
+}
+console.log(formatSummary(summarise(results)));
+console.log(`total ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+if (args.file) {
+  const head = 'instance\tset\topt\tbars\tlower_bound\toptimal\tms\tffd\tffd_ms\tfeasible';
+  const rows = results.map((r) =>
+    [r.name, r.set, r.optimum, r.bars, r.lowerBound, r.optimal, r.ms.toFixed(1), r.ffdBars, r.ffdMs.toFixed(2), r.feasible].join('\t'),
+  );
+  writeFileSync(args.file, [head, ...rows].join('\n') + '\n');
+}
+const bad = results.filter((r) => !r.feasible || r.lowerBound > r.optimum);
+process.exit(bad.length ? 1 : 0);

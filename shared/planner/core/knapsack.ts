@@ -1,0 +1,201 @@
+// Bounded knapsack for pricing cutting patterns: maximise Σ v_i a_i subject to Σ w_i a_i ≤ cap, 0 ≤ a_i ≤ u_i integer.
+// Two exact methods: a dynamic programme over the capacity when capacity × item pieces is small (it is immune to the
+// near-equal value/weight ratios that column generation produces), otherwise depth-first branch and bound with the
+// Dantzig bound, which never builds a table over the capacity (bar lengths in 0.01 mm stay cheap). Every answer carries
+// a rigorous upper bound on the optimum, used by the lower-bound certificate.
+
+export interface KnapsackResult {
+  /** Best value found. */
+  value: number;
+  /** Counts of the best solution (dense, one per item). */
+  counts: Int32Array;
+  /** Proven upper bound on the optimum (equals value up to tolerance when `exact`). */
+  upper: number;
+  exact: boolean;
+  /** Further improving solutions met on the way (value, counts), best last; may be empty. */
+  others: { value: number; counts: Int32Array }[];
+}
+
+const DP_BUDGET = 300_000;
+const PRUNE_EPS = 1e-10;
+
+/** Work of one dynamic-programme pricing (cells), or Infinity when branch and bound would be used. */
+export function knapsackWork(w: ArrayLike<number>, u: ArrayLike<number>, cap: number): number {
+  let pieces = 0;
+  for (let i = 0; i < w.length; i++) {
+    const ub = Math.min(u[i], Math.floor(cap / w[i]));
+    if (ub > 0) pieces += Math.ceil(Math.log2(ub + 1));
+  }
+  const cells = (cap + 1) * pieces;
+  return cells <= DP_BUDGET ? cells : Infinity;
+}
+
+export function solveKnapsack(
+  w: ArrayLike<number>,
+  v: ArrayLike<number>,
+  u: ArrayLike<number>,
+  cap: number,
+  nodeLimit = 200_000,
+): KnapsackResult {
+  const n = w.length;
+  const idx: number[] = [];
+  let pieces = 0;
+  for (let i = 0; i < n; i++) {
+    const ub = Math.min(u[i], Math.floor(cap / w[i]));
+    if (ub > 0 && v[i] > 1e-12) {
+      idx.push(i);
+      pieces += Math.ceil(Math.log2(ub + 1));
+    }
+  }
+  if (idx.length === 0) return { value: 0, counts: new Int32Array(n), upper: 0, exact: true, others: [] };
+  if ((cap + 1) * pieces <= DP_BUDGET) return dp(w, v, u, cap, idx, pieces, n);
+  return branchAndBound(w, v, u, cap, idx, n, nodeLimit);
+}
+
+function dp(
+  w: ArrayLike<number>,
+  v: ArrayLike<number>,
+  u: ArrayLike<number>,
+  cap: number,
+  idx: number[],
+  pieces: number,
+  n: number,
+): KnapsackResult {
+  const best = new Float64Array(cap + 1);
+  const take = new Uint8Array(pieces * (cap + 1));
+  const pItem = new Int32Array(pieces);
+  const pMult = new Int32Array(pieces);
+  let p = 0;
+  for (const i of idx) {
+    let left = Math.min(u[i], Math.floor(cap / w[i]));
+    for (let mult = 1; left > 0; mult *= 2) {
+      const k = Math.min(mult, left);
+      left -= k;
+      pItem[p] = i;
+      pMult[p] = k;
+      const pw = w[i] * k;
+      const pv = v[i] * k;
+      const off = p * (cap + 1);
+      for (let c = cap; c >= pw; c--) {
+        const cand = best[c - pw] + pv;
+        if (cand > best[c]) {
+          best[c] = cand;
+          take[off + c] = 1;
+        }
+      }
+      p++;
+    }
+  }
+  const counts = new Int32Array(n);
+  let c = cap;
+  for (let q = p - 1; q >= 0; q--) {
+    if (take[q * (cap + 1) + c]) {
+      counts[pItem[q]] += pMult[q];
+      c -= w[pItem[q]] * pMult[q];
+    }
+  }
+  const value = best[cap];
+  return { value, counts, upper: value + 1e-9 * Math.max(1, value), exact: true, others: [] };
+}
+
+function branchAndBound(
+  w: ArrayLike<number>,
+  v: ArrayLike<number>,
+  u: ArrayLike<number>,
+  cap: number,
+  idx: number[],
+  n: number,
+  nodeLimit: number,
+): KnapsackResult {
+  idx.sort((a, b) => v[b] / w[b] - v[a] / w[a] || w[b] - w[a]);
+  const k = idx.length;
+  const iw = new Float64Array(k);
+  const iv = new Float64Array(k);
+  const iu = new Int32Array(k);
+  for (let t = 0; t < k; t++) {
+    const i = idx[t];
+    iw[t] = w[i];
+    iv[t] = v[i];
+    iu[t] = Math.min(u[i], Math.floor(cap / w[i]));
+  }
+  // Prefix sums over the full multiplicities give the Dantzig bound of any suffix in O(log k).
+  const W = new Float64Array(k + 1);
+  const V = new Float64Array(k + 1);
+  for (let t = 0; t < k; t++) {
+    W[t + 1] = W[t] + iw[t] * iu[t];
+    V[t + 1] = V[t] + iv[t] * iu[t];
+  }
+  const minW = new Float64Array(k + 1).fill(Infinity);
+  for (let t = k - 1; t >= 0; t--) minW[t] = Math.min(minW[t + 1], iw[t]);
+
+  const bound = (t: number, room: number): number => {
+    // Largest s ≥ t with W[s] − W[t] ≤ room.
+    const target = W[t] + room;
+    let lo = t;
+    let hi = k;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (W[mid] <= target + 1e-9) lo = mid;
+      else hi = mid - 1;
+    }
+    let b = V[lo] - V[t];
+    if (lo < k) b += ((target - W[lo]) * iv[lo]) / iw[lo];
+    return b;
+  };
+
+  const rootUpper = bound(0, cap);
+  const cur = new Int32Array(k);
+  const bestCounts = new Int32Array(k);
+  let bestValue = 0;
+  // Greedy start so pruning bites at once.
+  {
+    let room = cap;
+    let val = 0;
+    for (let t = 0; t < k; t++) {
+      const a = Math.min(iu[t], Math.floor(room / iw[t]));
+      bestCounts[t] = a;
+      room -= a * iw[t];
+      val += a * iv[t];
+    }
+    bestValue = val;
+  }
+  const others: { value: number; counts: Int32Array }[] = [];
+  let nodes = 0;
+  let aborted = false;
+
+  const rec = (t: number, room: number, val: number): void => {
+    if (aborted) return;
+    if (++nodes > nodeLimit) {
+      aborted = true;
+      return;
+    }
+    if (t === k || room < minW[t]) {
+      if (val > bestValue + PRUNE_EPS) {
+        bestValue = val;
+        bestCounts.set(cur);
+        for (let s = t; s < k; s++) bestCounts[s] = 0;
+        if (others.length < 8) others.push({ value: val, counts: expand(cur, t) });
+      }
+      return;
+    }
+    if (val + bound(t, room) <= bestValue + PRUNE_EPS) return;
+    const maxA = Math.min(iu[t], Math.floor(room / iw[t]));
+    for (let a = maxA; a >= 0; a--) {
+      cur[t] = a;
+      rec(t + 1, room - a * iw[t], val + a * iv[t]);
+      if (aborted) break;
+    }
+    cur[t] = 0;
+  };
+  const expand = (c: Int32Array, upto: number): Int32Array => {
+    const out = new Int32Array(n);
+    for (let s = 0; s < upto; s++) out[idx[s]] = c[s];
+    return out;
+  };
+  rec(0, cap, 0);
+  const counts = expand(bestCounts, k);
+  const exact = !aborted;
+  const upper = exact ? bestValue + PRUNE_EPS + 1e-9 * Math.max(1, bestValue) : Math.max(rootUpper, bestValue);
+  const worse = others.filter((o) => o.value < bestValue - PRUNE_EPS);
+  return { value: bestValue, counts, upper, exact, others: worse };
+}

@@ -1,0 +1,276 @@
+// The improvement stage: greedy start, combinatorial bounds, then Gilmore–Gomory column generation with a diving
+// heuristic that fixes one pattern at a time and regenerates columns on the residual, backtracking by limited
+// discrepancy search (Sadykov, Vanderbeck, Pessoa, Tahiri & Uchoa, "Primal heuristics for branch and price: the assets
+// of diving methods", INFORMS J. Computing 31 (2019) 251–267). Each node also tries residual rounding: keep the
+// integer part of the LP and pack the rest greedily (Wäscher & Gau 1996; Belov & Scheithauer 2006).
+// Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
+import { martelloTothL2, materialBound } from './bounds';
+import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
+import { Master, type LpPoint } from './master';
+import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
+
+export type Phase = 'greedy' | 'bound' | 'improve' | 'done';
+
+export interface CoreProgress {
+  phase: Phase;
+  bestCost: number;
+  bestBars: number;
+  lowerBound: number;
+}
+
+export interface CoreOptions {
+  /** Absolute time (per `now`) at which to stop improving. */
+  deadline: number;
+  now: () => number;
+  /** Largest number of discrepancies tried by the search (default 6). */
+  maxDiscrepancy?: number;
+}
+
+export interface CoreResult {
+  solution: PatternUse[];
+  cost: number;
+  bars: number;
+  /** Certified lower bound on the cost (on the bar count when no prices are given). */
+  lowerBound: number;
+  optimal: boolean;
+  /** Certified lower bound on the number of bars (same as lowerBound when every bar costs 1). */
+  barLowerBound: number;
+  /** The best linear-programming bound computed, if any (unrounded). */
+  lpBound: number | null;
+  stats: { nodes: number; lpIterations: number; pricings: number; greedyCost: number; greedyBars: number };
+}
+
+interface Incumbent {
+  sol: PatternUse[];
+  cost: number;
+  bars: number;
+  used: number;
+}
+
+export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgress, CoreResult, void> {
+  const n = p.sizes.length;
+  const qty0 = p.types.map((t) => t.qty);
+  const improveTol = p.costUnit > 0 ? p.costUnit / 2 : 1e-9;
+
+  let inc: Incumbent | null = null;
+  const offer = (sol: PatternUse[]): boolean => {
+    const cost = solutionCost(p, sol);
+    const bars = solutionBars(sol);
+    let used = 0;
+    for (const u of sol) used += p.types[u.pattern.type].capacity * u.mult;
+    if (
+      inc === null ||
+      cost < inc.cost - improveTol ||
+      (cost <= inc.cost + improveTol && (bars < inc.bars || (bars === inc.bars && used < inc.used)))
+    ) {
+      inc = { sol: compress(sol), cost, bars, used };
+      return true;
+    }
+    return false;
+  };
+  const rules: [FitRule, OpenRule][] = [
+    ['first', 'largest'],
+    ['best', 'largest'],
+    ['first', 'on-hand-first'],
+    ['best', 'on-hand-first'],
+  ];
+  for (const [fit, open] of p.types.length > 1 ? rules : rules.slice(0, 2)) {
+    const s = greedyPack(p, p.demand, qty0, fit, open);
+    if (s) offer(s);
+  }
+  if (inc === null) throw new Error('the stock available cannot hold every part');
+  const greedyCost = (inc as Incumbent).cost;
+  const greedyBars = (inc as Incumbent).bars;
+  const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;
+  const cmax = Math.max(...p.types.map((t) => t.capacity));
+  const barBound = martelloTothL2(p.sizes, p.demand, cmax);
+
+  let lower = combinatorialBound(p);
+  const stats = { nodes: 0, lpIterations: 0, pricings: 0, greedyCost, greedyBars };
+  const best = (): Incumbent => inc as Incumbent;
+  const done = (lpBound: number | null, master: Master | null): CoreResult => {
+    if (master) {
+      stats.lpIterations = master.lp.iterations;
+      stats.pricings = master.knapsackCalls;
+    }
+    const b = best();
+    return {
+      solution: b.sol,
+      cost: b.cost,
+      bars: b.bars,
+      lowerBound: lower,
+      optimal: b.cost <= lower + improveTol,
+      barLowerBound: unitCost ? Math.max(barBound, lower) : barBound,
+      lpBound,
+      stats,
+    };
+  };
+  yield { phase: 'greedy', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+  if (best().cost <= lower + improveTol) return done(null, null);
+
+  const master = new Master(p);
+  for (const u of best().sol) master.addPattern(u.pattern);
+  const root = master.solve({ deadline: opts.deadline, now: opts.now, stopAt: best().cost - improveTol });
+  lower = Math.max(lower, master.rounded(root.lowerBound));
+  const lpBound = root.lowerBound;
+  yield { phase: 'bound', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+  const closed = (): boolean => best().cost <= lower + improveTol || opts.now() > opts.deadline;
+
+  const residualRounding = (fixed: PatternUse[], pt: LpPoint, demand: Int32Array, qty: Int32Array): void => {
+    const d = Int32Array.from(demand);
+    const q = Int32Array.from(qty);
+    const sol = fixed.slice();
+    const sorted = pt.support.slice().sort((a, b) => b.value - a.value);
+    for (const s of sorted) {
+      const k = Math.floor(s.value + 1e-9);
+      for (let c = 0; c < k; c++) {
+        const use = take(p, s.pattern, d, q);
+        if (!use) break;
+        sol.push({ pattern: use, mult: 1 });
+      }
+    }
+    for (const fit of ['first', 'best'] as FitRule[]) {
+      const qq = p.types.map((t, i) => (t.qty === null ? null : q[i]));
+      const rest = greedyPack(p, d, qq, fit, 'on-hand-first');
+      if (rest) offer(sol.concat(rest));
+    }
+  };
+
+  const maxDisc = opts.maxDiscrepancy ?? 6;
+  let exhausted = true;
+
+  function* dive(
+    fixed: PatternUse[],
+    fixedCost: number,
+    demand: Int32Array,
+    qty: Int32Array,
+    tabu: Set<string>,
+    disc: number,
+    budget: number,
+  ): Generator<CoreProgress, void, void> {
+    if (closed()) return;
+    let left = 0;
+    for (let i = 0; i < n; i++) left += demand[i];
+    if (left === 0) {
+      offer(fixed);
+      return;
+    }
+    stats.nodes++;
+    master.setResidual(demand, qty);
+    const pt = master.solve({ deadline: opts.deadline, now: opts.now, stopAt: best().cost - fixedCost - improveTol });
+    yield { phase: 'improve', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+    const resLower = master.rounded(pt.lowerBound);
+    if (fixedCost + resLower >= best().cost - improveTol) return;
+    residualRounding(fixed, pt, demand, qty);
+    if (fixedCost + resLower >= best().cost - improveTol || closed()) return;
+    // Fix first the column whose value is nearest a positive integer; among equals, the fullest bar (a near-perfect
+    // packing leaves no room for waste) and then the largest value.
+    const cands = pt.support
+      .filter((s) => !tabu.has(patternKey(s.pattern)) && useful(s.pattern, demand))
+      .map((s) => {
+        const r = Math.max(1, Math.round(s.value));
+        const waste = p.types[s.pattern.type].capacity - loadWithin(p, s.pattern, demand);
+        return { s, r, score: Math.round(Math.abs(s.value - r) * 1e6), waste };
+      })
+      .sort((a, b) => a.score - b.score || a.waste - b.waste || b.s.value - a.s.value);
+    if (cands.length === 0) return;
+    const width = Math.min(cands.length, 1 + budget - disc);
+    if (cands.length > width) exhausted = false;
+    const localTabu = new Set(tabu);
+    for (let k = 0; k < width; k++) {
+      if (closed()) return;
+      const { s, r } = cands[k];
+      const d = Int32Array.from(demand);
+      const q = Int32Array.from(qty);
+      const next = fixed.slice();
+      let cost = fixedCost;
+      for (let c = 0; c < r; c++) {
+        const use = take(p, s.pattern, d, q);
+        if (!use) break;
+        next.push({ pattern: use, mult: 1 });
+        cost += p.types[use.type].cost;
+      }
+      if (next.length === fixed.length) continue;
+      yield* dive(next, cost, d, q, localTabu, disc + k, budget);
+      localTabu.add(patternKey(s.pattern));
+    }
+  }
+
+  for (let budget = 0; budget <= maxDisc && !closed(); budget++) {
+    exhausted = true;
+    yield* dive([], 0, Int32Array.from(p.demand), Int32Array.from(p.types, (t) => t.qty ?? 0), new Set(), 0, budget);
+    if (exhausted) break;
+  }
+  yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+  return done(lpBound, master);
+}
+
+function useful(pt: Pattern, demand: Int32Array): boolean {
+  for (let i = 0; i < demand.length; i++) if (pt.counts[i] > 0 && demand[i] > 0) return true;
+  return false;
+}
+
+/** Load of a pattern counting only items still demanded. */
+function loadWithin(p: Problem, pt: Pattern, demand: Int32Array): number {
+  let s = 0;
+  for (let i = 0; i < demand.length; i++) s += Math.min(pt.counts[i], demand[i]) * p.sizes[i];
+  return s;
+}
+
+/**
+ * Take one copy of a pattern, trimmed to the residual demand, with the room freed by trimming refilled by the largest
+ * demanded items that fit (the LP may have covered a smaller item by a larger one's slot). Null when it holds nothing
+ * useful or no stock of its type is left.
+ */
+function take(p: Problem, pt: Pattern, demand: Int32Array, qty: Int32Array): Pattern | null {
+  if (p.types[pt.type].qty !== null && qty[pt.type] <= 0) return null;
+  const counts = new Int32Array(pt.counts.length);
+  let any = false;
+  let room = p.types[pt.type].capacity;
+  for (let i = 0; i < counts.length; i++) {
+    const c = Math.min(pt.counts[i], demand[i]);
+    if (c > 0) {
+      counts[i] = c;
+      demand[i] -= c;
+      room -= c * p.sizes[i];
+      any = true;
+    }
+  }
+  if (!any) return null;
+  for (let i = 0; i < counts.length && room >= p.sizes[p.sizes.length - 1]; i++) {
+    if (demand[i] > 0 && p.sizes[i] <= room) {
+      const c = Math.min(demand[i], Math.floor(room / p.sizes[i]));
+      counts[i] += c;
+      demand[i] -= c;
+      room -= c * p.sizes[i];
+    }
+  }
+  if (p.types[pt.type].qty !== null) qty[pt.type]--;
+  return { type: pt.type, counts };
+}
+
+/**
+ * Bounds that need no LP. Bars objective: L2 on the longest stock (any bar holds no more than it). Cost objective:
+ * the fractional material bound — fill the cheapest capacity per unit first, stock on hand within its quantity.
+ */
+export function combinatorialBound(p: Problem): number {
+  const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;
+  const cmax = Math.max(...p.types.map((t) => t.capacity));
+  if (unitCost) return martelloTothL2(p.sizes, p.demand, cmax);
+  let need = 0;
+  for (let i = 0; i < p.sizes.length; i++) need += p.sizes[i] * p.demand[i];
+  const byRate = p.types
+    .map((t) => ({ rate: t.cost / t.capacity, cap: t.qty === null ? Infinity : t.qty * t.capacity }))
+    .sort((a, b) => a.rate - b.rate);
+  let cost = 0;
+  for (const t of byRate) {
+    if (need <= 0) break;
+    const use = Math.min(need, t.cap);
+    cost += use * t.rate;
+    need -= use;
+  }
+  const tol = 1e-6 * Math.max(1, cost);
+  return p.costUnit > 0 ? p.costUnit * Math.ceil((cost - tol) / p.costUnit) : cost - tol;
+}
+
+export { materialBound };

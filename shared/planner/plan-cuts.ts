@@ -1,0 +1,75 @@
+// The planner's entry points. `planCuts` runs the solver in slices and yields to the event loop between them, so it
+// reports progress and honours an AbortSignal both in a browser Web Worker and in-process on the server;
+// `planCutsSync` runs the same steps without yielding (command line, benchmarks).
+import { solveCore, type CoreProgress, type CoreResult } from './core/solver';
+import { validateCutJob, type CutJob } from './job';
+import { buildPlan, type CutPlan } from './plan';
+import { prepareJob } from './scale';
+
+export type PlanPhase = CoreProgress['phase'];
+
+export interface PlanProgress {
+  phase: PlanPhase;
+  bestBars: number;
+  bestCost: number;
+  /** Lower bound on the objective (bars, or cost when prices are given). */
+  lowerBound: number;
+  elapsedMs: number;
+}
+
+export interface PlanOptions {
+  /** Time allowed for the improvement stage (default 2000 ms). The greedy answer is always produced. */
+  timeLimitMs?: number;
+  onProgress?: (p: PlanProgress) => void;
+  signal?: AbortSignal;
+}
+
+export const DEFAULT_TIME_LIMIT_MS = 2000;
+const SLICE_MS = 25;
+const PROGRESS_EVERY_MS = 100;
+
+const now = (): number => globalThis.performance?.now() ?? Date.now();
+
+function start(job: CutJob, opts: PlanOptions) {
+  const valid = validateCutJob(job);
+  const prep = prepareJob(valid);
+  if (prep.problem.types.length === 0) throw new Error('stock: no stock bars are available (every quantity is 0)');
+  const t0 = now();
+  const limit = Math.max(0, opts.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS);
+  const gen = solveCore(prep.problem, { deadline: t0 + limit, now });
+  return { prep, gen, t0 };
+}
+
+function finish(prep: ReturnType<typeof prepareJob>, res: CoreResult, t0: number): CutPlan {
+  return buildPlan(prep, res, now() - t0);
+}
+
+export function planCutsSync(job: CutJob, opts: Omit<PlanOptions, 'signal'> = {}): CutPlan {
+  const { prep, gen, t0 } = start(job, opts);
+  for (;;) {
+    const r = gen.next();
+    if (r.done) return finish(prep, r.value, t0);
+    opts.onProgress?.({ ...r.value, elapsedMs: now() - t0 });
+  }
+}
+
+export async function planCuts(job: CutJob, opts: PlanOptions = {}): Promise<CutPlan> {
+  opts.signal?.throwIfAborted();
+  const { prep, gen, t0 } = start(job, opts);
+  let sliceStart = now();
+  let lastProgress = -Infinity;
+  for (;;) {
+    const r = gen.next();
+    if (r.done) return finish(prep, r.value, t0);
+    const t = now();
+    if (opts.onProgress && (t - lastProgress >= PROGRESS_EVERY_MS || r.value.phase !== 'improve')) {
+      lastProgress = t;
+      opts.onProgress({ ...r.value, elapsedMs: t - t0 });
+    }
+    if (t - sliceStart >= SLICE_MS) {
+      await new Promise<void>((resolve) => setTimeout(resolve, 0));
+      opts.signal?.throwIfAborted();
+      sliceStart = now();
+    }
+  }
+}
