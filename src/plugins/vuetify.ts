@@ -59,6 +59,7 @@ export const vuetify = createVuetify({
     VDialog: { maxWidth: 520 },
     VAlert: { variant: 'tonal', density: 'comfortable', border: 'start' },
     VChip: { size: 'small', variant: 'tonal', label: true },
+    VEmptyState: { size: 64, color: 'muted' },
     VList: { density: 'comfortable' },
     VTabs: { color: 'primary' },
     VTooltip: { location: 'bottom' },
