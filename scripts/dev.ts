@@ -2,9 +2,10 @@
 import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { prepareDatabase, startServer, stopProcess } from './lib/app-env.ts';
+import { startMailFake } from './lib/mail-fake.ts';
 import { projectRoot } from './lib/postgres.ts';
 
-const { env } = await prepareDatabase(process.env.SLOTWRIGHT_DB ?? 'slotwright');
+const { env } = await startMailFake((await prepareDatabase(process.env.SLOTWRIGHT_DB ?? 'slotwright')).env);
 const api = startServer({ ...env, NODE_ENV: 'development' }, { watch: true });
 const vite = spawn(process.execPath, [join(projectRoot, 'node_modules/vite/bin/vite.js')], { env, cwd: projectRoot, stdio: 'inherit' });
 const stop = async () => {

@@ -1,9 +1,10 @@
 // `npm start`: database ready, client built, one Express process serving the app and /api on 127.0.0.1.
 import { buildClient, prepareDatabase, startServer } from './lib/app-env.ts';
+import { startMailFake } from './lib/mail-fake.ts';
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? '127.0.0.1';
-const { env } = await prepareDatabase(process.env.SLOTWRIGHT_DB ?? 'slotwright');
+const { env } = await startMailFake((await prepareDatabase(process.env.SLOTWRIGHT_DB ?? 'slotwright')).env);
 console.log('Building the client...');
 buildClient();
 const server = startServer({ ...env, NODE_ENV: 'production', PORT: String(port), HOST: host });

@@ -5,6 +5,7 @@
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { buildClient, prepareDatabase, startServer, stopProcess, waitForHealth } from './lib/app-env.ts';
+import { startMailFake } from './lib/mail-fake.ts';
 import { projectRoot, stopCluster, type Cluster } from './lib/postgres.ts';
 import { aptInstall, runAsync } from './lib/run.ts';
 
@@ -66,12 +67,14 @@ try {
     buildClient();
     const port = Number(process.env.E2E_PORT ?? 3999);
     const baseUrl = `http://127.0.0.1:${port}`;
-    const server = startServer({ ...db.env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1' });
+    const mail = await startMailFake(db.env, { dir: join(outDir, 'mail-fake'), port: 0 });
+    const server = startServer({ ...mail.env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1' });
     try {
       await waitForHealth(baseUrl);
-      await vitestProject('e2e', { ...db.env, E2E_BASE_URL: baseUrl });
+      await vitestProject('e2e', { ...mail.env, E2E_BASE_URL: baseUrl });
     } finally {
       await stopProcess(server);
+      await mail.stop();
     }
   });
 } finally {

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { z } from 'zod';
+import type { MailConfig } from './mail/mail-config';
 
 // The only place that reads process.env. Everything else receives a validated Config.
 
@@ -28,6 +29,14 @@ const envSchema = z.object({
   SERVE_CLIENT: booleanText.optional(),
   DB_POOL_MAX: z.coerce.number().int().positive().default(10),
   LOG_SQL: booleanText.default(false),
+  // Outgoing mail. With no SMTP_HOST the project's local fake server on 127.0.0.1 takes (and keeps) every message.
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  SMTP_SECURE: booleanText.optional(),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  SMTP_FROM: z.string().min(3).default('Slotwright <no-reply@slotwright.test>'),
+  MAIL_FAKE_DIR: z.string().default('.data/mail-fake'),
 });
 
 export interface Config {
@@ -49,6 +58,7 @@ export interface Config {
   serveClient: boolean;
   dbPoolMax: number;
   logSql: boolean;
+  mail: MailConfig;
 }
 
 export class ConfigError extends Error {
@@ -91,5 +101,15 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     serveClient: e.SERVE_CLIENT ?? e.NODE_ENV === 'production',
     dbPoolMax: e.DB_POOL_MAX,
     logSql: e.LOG_SQL,
+    mail: {
+      host: e.SMTP_HOST ?? '127.0.0.1',
+      port: e.SMTP_PORT ?? (e.SMTP_HOST ? (e.SMTP_SECURE ? 465 : 587) : 2525),
+      secure: e.SMTP_SECURE ?? false,
+      user: e.SMTP_USER || null,
+      pass: e.SMTP_PASS || null,
+      from: e.SMTP_FROM,
+      fake: !e.SMTP_HOST,
+      fakeDir: e.MAIL_FAKE_DIR,
+    },
   };
 }
