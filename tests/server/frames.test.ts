@@ -124,7 +124,7 @@ describe('saving with optimistic locking', () => {
 
   it('an invalid document is refused with 422 before anything is stored', async () => {
     const frame = await newFrame();
-    const res = await designer.put(`/api/frames/${frame.id}/document`, { baseVersion: 1, document: { members: [] } });
+    const res = await designer.put(`/api/frames/${frame.id}/document`, { baseVersion: 1, document: { schemaVersion: 'x', members: [] } });
     expect(res.status).toBe(422);
     expect(res.body.error.fields).toHaveProperty(['document.schemaVersion']);
     const stored = await storedFrame(ctx.orm, frame.id);

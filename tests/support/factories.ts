@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import type { FrameDocumentJson } from '@shared/api/frames';
 import type { Role } from '@shared/api/roles';
+import { parseFrameDocument } from '@shared/model/parse';
 import type { Orm } from '../../server/db';
 import { FrameRevision } from '../../server/modules/frames/frame-revision.entity';
 import { Frame, type FrameEntity } from '../../server/modules/frames/frame.entity';
@@ -70,11 +71,23 @@ export async function makeProject(
   return project;
 }
 
+/**
+ * A valid frame document with `memberCount` rails (as the document model parses it, defaults filled in, which is
+ * also how the server stores it). `tag` makes the member ids, and so the document, differ between calls.
+ */
 export function sampleDocument(memberCount = 2, tag = 'a'): FrameDocumentJson {
-  return {
+  return parseFrameDocument({
     schemaVersion: 1,
-    members: Array.from({ length: memberCount }, (_, i) => ({ id: `${tag}${i}`, type: 'rail', length_mm: 500 + i })),
-  };
+    members: Array.from({ length: memberCount }, (_, i) => ({
+      type: 'member',
+      id: `${tag}${i}`,
+      profile: '40x40-s8',
+      axis: 'x',
+      start: { offset_mm: 0 },
+      length_mm: 500 + i,
+      place: { z: { offset_mm: 100 * i } },
+    })),
+  }) as unknown as FrameDocumentJson;
 }
 
 export async function makeFrame(

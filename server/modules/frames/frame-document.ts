@@ -1,33 +1,34 @@
-import { z } from 'zod';
 import type { FrameDocumentJson } from '@shared/api/frames';
+import { emptyFrameDocument as emptyModelDocument } from '@shared/model/frame-document';
+import { frameDocumentIssues, parseFrameDocument } from '@shared/model/parse';
 import { UnprocessableError } from '../../errors';
-import { issueFields } from '../../validate';
 
-// The one place the server decides whether a frame document is acceptable. Until the full document schema
-// is available from shared/model, a document is accepted when it is an object with a numeric schemaVersion
-// and a members array (anything else passes through untouched).
-const minimalDocumentSchema = z.looseObject({
-  schemaVersion: z.number({ message: 'Must be a number' }).int({ message: 'Must be a whole number' }).min(1),
-  members: z.array(z.unknown(), { message: 'Must be an array' }),
-});
+// The one place the server decides whether a frame document is acceptable: the document model's own schema
+// and reference checks (older schema versions are upgraded). What is stored is the parsed document, so every
+// stored document is current and complete.
 
 export interface CheckedDocument {
   document: FrameDocumentJson;
   memberCount: number;
 }
 
-/** Validates a document from a request; 422 with `fields` keyed `document.<path>` when it is not acceptable. */
+function requestField(field: string): string {
+  return field === '' || field === 'document' ? 'document' : `document.${field}`;
+}
+
+/** Validates a document from a request; 422 with every problem in `fields`, keyed `document.<path>`. */
 export function checkFrameDocument(json: unknown): CheckedDocument {
-  const result = minimalDocumentSchema.safeParse(json);
-  if (!result.success) {
-    const fields = issueFields(result.error.issues, '');
-    const prefixed = Object.fromEntries(Object.entries(fields).map(([k, v]) => [k ? `document.${k}` : 'document', v]));
-    throw new UnprocessableError('The frame document is not valid', prefixed);
+  const issues = frameDocumentIssues(json);
+  if (issues.length > 0) {
+    const fields: Record<string, string> = {};
+    for (const i of issues) fields[requestField(i.field)] ??= i.message;
+    throw new UnprocessableError('The frame document is not valid', fields);
   }
-  return { document: result.data, memberCount: result.data.members.length };
+  const document = parseFrameDocument(json);
+  return { document: document as unknown as FrameDocumentJson, memberCount: document.members.length };
 }
 
 /** The document a new frame starts with when the client sends none. */
-export function emptyFrameDocument(): FrameDocumentJson {
-  return { schemaVersion: 1, members: [] };
+export function emptyFrameDocument(name = ''): FrameDocumentJson {
+  return emptyModelDocument(name) as unknown as FrameDocumentJson;
 }
