@@ -50,7 +50,7 @@ export type HardwareResult = {
   warnings: ReportWarning[];
 };
 
-type NutUse = { member: number; face: FaceName; slot: number; source: string };
+type NutUse = { member: number; face: FaceName; slot: number; count: number; source: string };
 
 /** Which slot of a face a fastener at `target` (a coordinate across the face) goes in. */
 function slotIndex(m: MemberGeometry, box: Box, face: FaceName, target: number): number {
@@ -86,7 +86,6 @@ export function hardwareList(
   let mass_g = 0;
   const nuts: NutUse[] = [];
   const warnings: ReportWarning[] = [];
-  const plainWarned = new Set<string>();
 
   const add = (line: Omit<HardwareLine, 'count' | 'order_qty'>, qty: number, at: Vec3) => {
     if (qty <= 0) return;
@@ -100,32 +99,45 @@ export function hardwareList(
     moment.z += g * at.z;
   };
 
-  /** `qty` screws, each with its nut, into member `m`'s `face`, slot under `target`, clamping `clamp_mm`. */
-  const fasten = (m: MemberGeometry, face: FaceName, target: number, clamp_mm: number, qty: number, source: string, at: Vec3) => {
-    if (qty <= 0) return;
+  type Lines = { screw: Omit<HardwareLine, 'count' | 'order_qty'>; nut: Omit<HardwareLine, 'count' | 'order_qty'> };
+  const fastenerLines = new Map<string, Lines>();
+  /** The screw and nut lines for a fastening into a member of this profile through `clamp_mm`, worked out once. */
+  const linesFor = (m: MemberGeometry, clamp_mm: number): Lines => {
+    const key = `${m.info.id}|${clamp_mm}`;
+    let lines = fastenerLines.get(key);
+    if (lines) return lines;
     const f = fastenerOf(m.info);
     if (m.info.slotted) {
       const len = screwLengthFor(f, clamp_mm);
-      add({ key: `screw|${f}|${len}`, kind: 'screw', name: `cap screw ${screwLabel(f, len)}`, size: f, length_mm: len, unit_mass_g: screwMass_g(f, len) }, qty, at);
       const slot = m.info.profile.slot_mm as number;
-      add({ key: `t-nut|${f}|${slot}`, kind: 't-nut', name: `T-nut ${f} for ${slot} mm slot`, size: f, length_mm: null, unit_mass_g: tNutMass_g(f) }, qty, at);
-      const k = slotIndex(m, eff[m.index], face, target);
-      for (let n = 0; n < qty; n++) nuts.push({ member: m.index, face, slot: k, source });
-      return;
-    }
-    // A plain section has no slot: a bolt right through it and a hex nut.
-    const d = FASTENER_THREADS[f].major_mm;
-    const len = stockScrewLength(f, clamp_mm + m.info.module_mm + d);
-    add({ key: `screw|${f}|${len}`, kind: 'screw', name: `cap screw ${screwLabel(f, len)}`, size: f, length_mm: len, unit_mass_g: screwMass_g(f, len) }, qty, at);
-    add({ key: `nut|${f}`, kind: 'nut', name: `hex nut ${f}`, size: f, length_mm: null, unit_mass_g: hexNutMass_g(f) }, qty, at);
-    if (!plainWarned.has(m.info.id)) {
-      plainWarned.add(m.info.id);
+      lines = {
+        screw: { key: `screw|${f}|${len}`, kind: 'screw', name: `cap screw ${screwLabel(f, len)}`, size: f, length_mm: len, unit_mass_g: screwMass_g(f, len) },
+        nut: { key: `t-nut|${f}|${slot}`, kind: 't-nut', name: `T-nut ${f} for ${slot} mm slot`, size: f, length_mm: null, unit_mass_g: tNutMass_g(f) },
+      };
+    } else {
+      // A plain section has no slot: a bolt right through it and a hex nut.
+      const len = stockScrewLength(f, clamp_mm + m.info.module_mm + FASTENER_THREADS[f].major_mm);
+      lines = {
+        screw: { key: `screw|${f}|${len}`, kind: 'screw', name: `cap screw ${screwLabel(f, len)}`, size: f, length_mm: len, unit_mass_g: screwMass_g(f, len) },
+        nut: { key: `nut|${f}`, kind: 'nut', name: `hex nut ${f}`, size: f, length_mm: null, unit_mass_g: hexNutMass_g(f) },
+      };
       warnings.push({
         code: 'plain-section-fastener',
         member_id: m.member.id,
         message: `${m.info.name} has no T-slots: its fastenings are listed as ${f} bolts right through it with hex nuts`,
       });
     }
+    fastenerLines.set(key, lines);
+    return lines;
+  };
+
+  /** `qty` screws, each with its nut, into member `m`'s `face`, slot under `target`, clamping `clamp_mm`. */
+  const fasten = (m: MemberGeometry, face: FaceName, target: number, clamp_mm: number, qty: number, source: string, at: Vec3) => {
+    if (qty <= 0) return;
+    const lines = linesFor(m, clamp_mm);
+    add(lines.screw, qty, at);
+    add(lines.nut, qty, at);
+    if (m.info.slotted) nuts.push({ member: m.index, face, slot: slotIndex(m, eff[m.index], face, target), count: qty, source });
   };
 
   const centreOn = (box: Box, a: Axis) => (box.min[ai(a)] + box.max[ai(a)]) / 2;
@@ -231,9 +243,9 @@ function slotOrder(
     const key = `${n.member}|${n.face}|${n.slot}`;
     const g = groups.get(key);
     if (g) {
-      g.count += 1;
+      g.count += n.count;
       if (!g.for.includes(n.source)) g.for.push(n.source);
-    } else groups.set(key, { member: n.member, face: n.face, slot: n.slot, count: 1, closed_by: closed, for: [n.source] });
+    } else groups.set(key, { member: n.member, face: n.face, slot: n.slot, count: n.count, closed_by: closed, for: [n.source] });
   }
   return [...groups.values()].sort((p, q) => p.member - q.member || (p.face < q.face ? -1 : p.face > q.face ? 1 : 0) || p.slot - q.slot);
 }

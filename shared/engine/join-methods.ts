@@ -111,10 +111,27 @@ function customMethod(m: JoinMethod): MethodDef {
   };
 }
 
-/** Built-in methods and the document's own, by id. */
+/** A method whose recipe is worked out once per pair of profiles (a frame has few pairs and many joints). */
+function memoised(def: MethodDef): MethodDef {
+  const cache = new Map<string, Recipe>();
+  return {
+    ...def,
+    recipe: (butting, through) => {
+      const key = `${butting.id}|${through?.id ?? ''}`;
+      let r = cache.get(key);
+      if (!r) {
+        r = def.recipe(butting, through);
+        cache.set(key, r);
+      }
+      return r;
+    },
+  };
+}
+
+/** Built-in methods and the document's own, by id; one table per report. */
 export function methodTable(doc: Pick<FrameDocument, 'joinMethods'>): Map<string, MethodDef> {
-  const table = new Map<string, MethodDef>(BUILT_IN_METHODS.map((m) => [m.id, m]));
-  for (const m of doc.joinMethods) table.set(m.id, customMethod(m));
+  const table = new Map<string, MethodDef>(BUILT_IN_METHODS.map((m) => [m.id, memoised(m)]));
+  for (const m of doc.joinMethods) table.set(m.id, memoised(customMethod(m)));
   return table;
 }
 

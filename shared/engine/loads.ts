@@ -1,6 +1,6 @@
 import { STANDARD_GRAVITY } from '../geometry/units';
 import type { FrameDocument } from '../model/frame-document';
-import { beam, type BeamLoad, type BeamSupport } from './beam';
+import { beam, type BeamInput, type BeamLoad, type BeamResult, type BeamSupport } from './beam';
 import { ai, type Box } from './box';
 import type { JointsResult } from './joints';
 import type { ModuleBearing } from './bearing';
@@ -137,6 +137,7 @@ export function checkLoads(
 
   const axial = members.map(() => 0);
   const checks: MemberCheck[] = [];
+  const memo = beamMemo();
   const sendTo = (from: number, target: number | null, R: number, at: { x: number; y: number; z: number }) => {
     if (target === null || cut.has(`${from}>${target}`) || Math.abs(R) < 1e-9) return;
     if (vertical(target)) axial[target] += R;
@@ -159,7 +160,7 @@ export function checkLoads(
     }
     const loads = pending[i];
     if (loads.length === 0) continue;
-    const check = checkMember(members[i], lengthOf(i), loads, supports[i], { shockFactor, deflectionLimitN, safetyFactor });
+    const check = checkMember(memo, members[i], lengthOf(i), loads, supports[i], { shockFactor, deflectionLimitN, safetyFactor });
     checks.push(check.result);
     if (check.result.utilisation === null) {
       warnings.push({
@@ -198,7 +199,25 @@ function clip(loads: readonly MemberLoad[], lo: number, hi: number, includeHi: b
   return out;
 }
 
+/** Beams solved once per report: a long run repeats the same bay, and with it the same beams. */
+type BeamMemo = (input: BeamInput) => BeamResult;
+
+function beamMemo(): BeamMemo {
+  const cache = new Map<string, BeamResult>();
+  return (input) => {
+    let key = `${input.support}|${input.span_mm}|${input.E_MPa}|${input.I_mm4}`;
+    for (const l of input.loads) key += l.kind === 'point' ? `|p${l.P_N}@${l.a_mm}` : `|u${l.w_N_per_mm}@${l.from_mm ?? ''}-${l.to_mm ?? ''}`;
+    let r = cache.get(key);
+    if (!r) {
+      r = beam(input);
+      cache.set(key, r);
+    }
+    return r;
+  };
+}
+
 function checkMember(
+  memo: BeamMemo,
   m: MemberGeometry,
   L: number,
   loads: readonly MemberLoad[],
@@ -222,8 +241,8 @@ function checkMember(
     const span = hi - lo;
     if (span < SAME_POINT_MM || beamLoads.length === 0) return null;
     const input = { span_mm: span, E_MPa: s.E_MPa, I_mm4: I, loads: beamLoads };
-    const r = beam({ ...input, support });
-    const fixed = support === 'simple' ? beam({ ...input, support: 'fixed' }) : null;
+    const r = memo({ ...input, support });
+    const fixed = support === 'simple' ? memo({ ...input, support: 'fixed' }) : null;
     const limit = (support === 'cantilever' ? 2 * span : span) / limits.deflectionLimitN;
     const stress = r.max_moment_Nmm / W;
     const dRatio = Math.abs(r.deflection_mm) / limit;

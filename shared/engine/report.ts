@@ -175,7 +175,13 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       });
     }
   }
-  for (const t of tNutOrder) warnings.push({ code: 'slot-closed', member_id: t.member_id, message: t.message });
+  if (tNutOrder.length > 0) {
+    const nuts = tNutOrder.reduce((n, t) => n + t.count, 0);
+    warnings.push({
+      code: 'slot-closed',
+      message: `${nuts} T-nut${nuts === 1 ? '' : 's'} in ${tNutOrder.length} slot${tNutOrder.length === 1 ? '' : 's'} closed at both ends must be slid in before assembly (or use drop-in T-nuts): see the T-nut order`,
+    });
+  }
 
   const byProfile = new Map<string, { profile: string; length_mm: number; mass_kg: number }>();
   members.forEach((g, i) => {

@@ -1,7 +1,7 @@
 import type { Box } from './box';
 
-const OFFSET = 65_536; // cells either side of the origin: ±6.5 km at 100 mm cells
-const SPAN = 131_072;
+/** Cell coordinates hashed to a small integer (a Map keyed by small integers is fast); a shared bucket only costs a check. */
+const cellKey = (x: number, y: number, z: number): number => (Math.imul(x, 73_856_093) ^ Math.imul(y, 19_349_663) ^ Math.imul(z, 83_492_791)) & 0x3fffffff;
 
 /**
  * A uniform grid over boxes, so finding what touches a member's end looks at the few members near it rather than
@@ -20,21 +20,21 @@ export class SpatialHash {
   }
 
   private range(lo: number, hi: number): [number, number] {
-    return [Math.floor(lo / this.cell) + OFFSET, Math.floor(hi / this.cell) + OFFSET];
+    return [Math.floor(lo / this.cell), Math.floor(hi / this.cell)];
   }
 
   private each(box: Box, fn: (key: number) => void): void {
     const [x0, x1] = this.range(box.min[0], box.max[0]);
     const [y0, y1] = this.range(box.min[1], box.max[1]);
     const [z0, z1] = this.range(box.min[2], box.max[2]);
-    for (let x = x0; x <= x1; x++) for (let y = y0; y <= y1; y++) for (let z = z0; z <= z1; z++) fn((x * SPAN + y) * SPAN + z);
+    for (let x = x0; x <= x1; x++) for (let y = y0; y <= y1; y++) for (let z = z0; z <= z1; z++) fn(cellKey(x, y, z));
   }
 
   insert(id: number, box: Box): void {
     this.each(box, (key) => {
       const list = this.cells.get(key);
-      if (list) list.push(id);
-      else this.cells.set(key, [id]);
+      if (!list) this.cells.set(key, [id]);
+      else if (list[list.length - 1] !== id) list.push(id);
     });
   }
 

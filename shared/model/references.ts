@@ -103,8 +103,12 @@ export function checkReferences(doc: FrameDocument): void {
     });
   });
 
+  const knownProfiles = new Set<string>();
   doc.members.forEach((m, i) => {
-    checkProfileId(doc, m.profile, ['members', i, 'profile']);
+    if (!knownProfiles.has(m.profile)) {
+      checkProfileId(doc, m.profile, ['members', i, 'profile']);
+      knownProfiles.add(m.profile);
+    }
     for (const end of ['start', 'end'] as const) {
       const e = m[end];
       if (!e) continue;

@@ -1,0 +1,59 @@
+// `npm run bench`: time computeReport on a 500-member frame. Target: median under 50 ms on the 2-core build
+// machine (the editor recomputes the whole report on every change). Bounded: at most RUNS runs or ~20 s.
+import { computeReport } from '@shared/engine/report';
+import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
+import type { FrameDocument } from '@shared/model/frame-document';
+
+const RUNS = 200;
+const WARM_UP = 20;
+const BUDGET_MS = 20_000;
+
+/** A long cabinet run: 50 bays alternating base modules and side-rail drawers, 10 members a bay (+4). */
+export function benchFrame(bays = 50): FrameDocument {
+  const list: CabinetBay[] = [];
+  for (let k = 0; k < bays; k++) {
+    const base = k % 2 === 0;
+    list.push({
+      id: `bay-${k}`,
+      clearance_mm: base ? 10 : 12.7,
+      module: {
+        id: `module-${k}`,
+        name: base ? `Cooler ${k}` : `Drawers ${k}`,
+        kind: base ? 'appliance' : 'drawer-stack',
+        bearing: base ? 'base' : 'side-rails',
+        size: { w_mm: 300 + ((k * 37) % 200), d_mm: 400, h_mm: base ? 420 : 300 },
+        mass_kg: base ? 15 : 8,
+        contents_kg: base ? 15 : 10,
+        raise_mm: base ? 0 : 100,
+      },
+    });
+  }
+  return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
+}
+
+const quantile = (sorted: number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+
+function main(): void {
+  const doc = benchFrame();
+  const first = computeReport(doc);
+  for (let i = 0; i < WARM_UP; i++) computeReport(doc);
+  const times: number[] = [];
+  const began = performance.now();
+  while (times.length < RUNS && performance.now() - began < BUDGET_MS) {
+    const t0 = performance.now();
+    computeReport(doc);
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  const mean = times.reduce((s, t) => s + t, 0) / times.length;
+  const median = quantile(times, 0.5);
+  const p95 = quantile(times, 0.95);
+  process.stdout.write(
+    `computeReport: ${first.members.length} members, ${first.joints.length} joints, ${first.modules.length} modules, ` +
+      `${first.loads.members.length} loaded members\n` +
+      `${times.length} runs: median ${median.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms, mean ${mean.toFixed(1)} ms, ` +
+      `min ${times[0].toFixed(1)} ms (target: median < 50 ms) ${median < 50 ? 'OK' : 'OVER TARGET'}\n`,
+  );
+}
+
+main();
