@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { healthResponseSchema } from '@shared/api/errors';
+import { createApp, disposeApp } from '../../server/app';
 import { createTestContext, type TestContext } from '../support/test-app';
 
 describe('GET /api/health', () => {
@@ -27,5 +28,19 @@ describe('GET /api/health', () => {
     expect(res.status).toBe(503);
     expect(res.body).toEqual({ ok: false, db: 'down' });
     await down.close();
+  });
+
+  it('an app given no session store opens its own PostgreSQL store and closes it on dispose', async () => {
+    const app = createApp({ orm: ctx.orm, config: ctx.config });
+    try {
+      const res = await request(app).get('/api/auth/csrf').expect(200);
+      expect(res.body.token).toEqual(expect.any(String));
+      const cookie = String(res.headers['set-cookie']).split(';')[0];
+      const rows = await ctx.orm.em.fork().getConnection().execute('select count(*)::int as n from "session"');
+      expect(rows[0].n).toBeGreaterThan(0);
+      expect(cookie).toMatch(/^slotwright\.sid=/);
+    } finally {
+      await disposeApp(app);
+    }
   });
 });
