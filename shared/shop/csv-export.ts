@@ -37,11 +37,17 @@ export function cutListCsv(cutList: ShopCutList, units: ShopUnits): string {
   return toCsv(rows);
 }
 
-/** The order list: stock bars, then the cut-to-length alternative. */
+/** The order list: stock bars (and shelf offcuts used), then the cut-to-length alternative. */
 export function orderListCsv(order: OrderList): string {
-  const rows: CsvCell[][] = [['Buy as', 'Profile', 'Length (mm)', 'Quantity', `Unit price (${order.currency})`, `Cost (${order.currency})`, 'Part marks']];
-  for (const l of order.stock) rows.push(['stock bar', l.profileName, l.length_mm, l.qty, l.unitPrice, l.cost, '']);
-  for (const l of order.cutToLength) rows.push(['cut to length', l.profileName, l.length_mm, l.qty, null, null, l.marks.join(' ')]);
-  rows.push(['cutting fee', '', null, order.cutCount, order.feePerCut, order.feePerCut === null ? null : Math.round(order.feePerCut * order.cutCount * 100) / 100, '']);
+  const c = order.currency;
+  const rows: CsvCell[][] = [['Buy as', 'Profile', 'Length (mm)', 'Quantity', `Unit price (${c})`, `Cost (${c})`, 'Part marks']];
+  for (const p of order.profiles) {
+    for (const l of p.order.stock.lines) rows.push([l.onHand ? 'offcut on hand' : 'stock bar', p.profileName, l.stockLength, l.qty, l.unitPrice, l.cost, '']);
+  }
+  for (const p of order.profiles) {
+    for (const l of p.order.cutToLength.lines) rows.push(['cut to length', p.profileName, l.length, l.qty, null, l.cost, l.labels.join(' ')]);
+  }
+  rows.push(['total stock bars', '', null, order.barsToBuy, null, order.stockTotal, '']);
+  rows.push(['total cut to length', '', null, order.cutCount, null, order.cutToLengthTotal, '']);
   return toCsv(rows);
 }

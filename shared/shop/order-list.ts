@@ -1,76 +1,53 @@
-import type { OrderCutLine, OrderList, OrderStockLine, ProfilePlan, ShopCutList } from './types';
+import { orderList as plannerOrderList, type CutJob, type CutPlan } from '../planner';
+import type { OrderList } from './types';
 
-/** What a supplier charges for bought-cut-to-length parts. Null figures are unknown and leave the total open. */
-export type CutToLengthPricing = { feePerCut: number | null; pricePerMetre: Readonly<Record<string, number | null>> };
+/** One profile's job and plan as the planner took and gave them. */
+export type PlannedProfile = { profileId: string; profileName: string; job: CutJob; plan: CutPlan };
+
+/** A supplier's terms for parts cut to length: a fee per cut, and a price per metre (else the cheapest bar's). */
+export type CutToLengthTerms = { cutFee: number; pricePerMetre?: Readonly<Record<string, number>> };
 
 const money = (v: number): number => Math.round(v * 100) / 100;
 
 /**
- * The order list: bars to buy (shelf offcuts left out) grouped by profile and stock length, and beside it the same
- * parts bought cut to length by the supplier, grouped by length, so the builder can compare the two ways of buying.
+ * The order list across profiles: the stock planner's grouped order list for each profile (bars by length with
+ * cost, and the same parts bought cut to length), with totals so the two ways of buying can be compared.
  */
-export function orderList(plans: readonly ProfilePlan[], cutList: ShopCutList, currency: string, pricing: CutToLengthPricing): OrderList {
-  const stock = new Map<string, OrderStockLine>();
-  for (const plan of plans) {
-    for (const bar of plan.bars) {
-      if (bar.fromShelf) continue;
-      const key = `${plan.profileId}|${bar.stock_mm}|${bar.price}`;
-      const line = stock.get(key) ?? { profileId: plan.profileId, profileName: plan.profileName, length_mm: bar.stock_mm, qty: 0, unitPrice: bar.price, cost: 0 };
-      line.qty++;
-      line.cost = money(line.qty * line.unitPrice);
-      stock.set(key, line);
-    }
-  }
-  const stockLines = [...stock.values()].sort((a, b) => a.profileName.localeCompare(b.profileName) || b.length_mm - a.length_mm);
-
-  const cuts = new Map<string, OrderCutLine>();
-  const metres = new Map<string, { profileId: string; profileName: string; mm: number }>();
-  let cutCount = 0;
-  for (const p of cutList.parts) {
-    const key = `${p.profileId}|${p.cutLength_mm}`;
-    const line = cuts.get(key) ?? { profileId: p.profileId, profileName: p.profileName, length_mm: p.cutLength_mm, qty: 0, marks: [] };
-    line.qty += p.qty;
-    line.marks.push(p.mark);
-    cuts.set(key, line);
-    cutCount += p.qty;
-    const m = metres.get(p.profileId) ?? { profileId: p.profileId, profileName: p.profileName, mm: 0 };
-    m.mm += p.cutLength_mm * p.qty;
-    metres.set(p.profileId, m);
-  }
-  const cutLines = [...cuts.values()].sort((a, b) => a.profileName.localeCompare(b.profileName) || b.length_mm - a.length_mm);
-  const metreLines = [...metres.values()]
-    .sort((a, b) => a.profileName.localeCompare(b.profileName))
-    .map((m) => {
-      const price = pricing.pricePerMetre[m.profileId] ?? null;
-      const metresRounded = Math.round(m.mm) / 1000;
-      return { profileId: m.profileId, profileName: m.profileName, metres: metresRounded, pricePerMetre: price, cost: price === null ? null : money(price * metresRounded) };
-    });
-  const material = metreLines.every((m) => m.cost !== null) ? metreLines.reduce((s, m) => s + (m.cost ?? 0), 0) : null;
-  const fee = pricing.feePerCut;
+export function orderList(profiles: readonly PlannedProfile[], currency: string, terms: CutToLengthTerms): OrderList {
+  const out = profiles.map((p) => ({
+    profileId: p.profileId,
+    profileName: p.profileName,
+    order: plannerOrderList(p.profileId, p.job, p.plan, { cutFee: terms.cutFee, pricePerMetre: terms.pricePerMetre?.[p.profileId] }),
+  }));
   return {
     currency,
-    stock: stockLines,
-    stockTotal: money(stockLines.reduce((s, l) => s + l.cost, 0)),
-    cutToLength: cutLines,
-    cutToLengthMetres: metreLines,
-    cutCount,
-    feePerCut: fee,
-    cutToLengthTotal: material === null || fee === null ? null : money(material + fee * cutCount),
+    profiles: out,
+    barsToBuy: out.reduce((n, p) => n + p.order.stock.barsToBuy, 0),
+    stockTotal: money(out.reduce((s, p) => s + p.order.stock.cost, 0)),
+    cutCount: out.reduce((n, p) => n + p.order.cutToLength.cuts, 0),
+    cutToLengthTotal: money(out.reduce((s, p) => s + p.order.cutToLength.cost, 0)),
   };
 }
 
-/** The order as plain text, for the body of the e-mail to the supplier. */
-export function orderText(order: OrderList, opts: { lengthText: (mm: number) => string; money: (v: number) => string; heading: string }): string {
-  const lines: string[] = [opts.heading, ''];
-  lines.push('Stock bars');
-  if (order.stock.length === 0) lines.push('  (none)');
-  for (const l of order.stock) {
-    lines.push(`  ${l.qty} × ${l.profileName}, ${opts.lengthText(l.length_mm)} bars at ${opts.money(l.unitPrice)} = ${opts.money(l.cost)}`);
+export type OrderMode = 'stock' | 'cut-to-length';
+
+/** The order as plain text, for the body of the e-mail to the supplier: the chosen way of buying first. */
+export function orderText(order: OrderList, mode: OrderMode, f: { lengthText: (mm: number) => string; money: (v: number) => string; heading: string }): string {
+  const stock: string[] = ['Stock bars to buy:'];
+  for (const p of order.profiles) {
+    for (const l of p.order.stock.lines) {
+      if (l.onHand) continue;
+      stock.push(`  ${l.qty} × ${p.profileName}, ${f.lengthText(l.stockLength)} bars at ${f.money(l.unitPrice)} each = ${f.money(l.cost)}`);
+    }
   }
-  lines.push(`  Total: ${opts.money(order.stockTotal)}`, '');
-  lines.push('Or cut to length (alternative)');
-  for (const l of order.cutToLength) lines.push(`  ${l.qty} × ${l.profileName} cut to ${opts.lengthText(l.length_mm)} (marks ${l.marks.join(', ')})`);
-  lines.push(`  ${order.cutCount} cuts${order.feePerCut === null ? '' : ` at ${opts.money(order.feePerCut)} per cut`}`);
-  if (order.cutToLengthTotal !== null) lines.push(`  Total: ${opts.money(order.cutToLengthTotal)}`);
-  return lines.join('\n');
+  if (stock.length === 1) stock.push('  (none: everything comes from offcuts on hand)');
+  stock.push(`  Total: ${f.money(order.stockTotal)}`);
+  const cut: string[] = ['Parts cut to length:'];
+  for (const p of order.profiles) {
+    for (const l of p.order.cutToLength.lines) cut.push(`  ${l.qty} × ${p.profileName} cut to ${f.lengthText(l.length)} (part marks ${l.labels.join(', ')})`);
+  }
+  cut.push(`  ${order.cutCount} cuts; total with cutting fees: ${f.money(order.cutToLengthTotal)}`);
+  const [first, second] = mode === 'stock' ? [stock, cut] : [cut, stock];
+  second[0] = mode === 'stock' ? 'For comparison, the same parts cut to length:' : 'For comparison, as stock bars:';
+  return [f.heading, '', ...first, '', ...second].join('\n');
 }

@@ -1,3 +1,5 @@
+import type { OrderList as PlannerOrderList } from '../planner/order-list';
+
 // What the shop documents are made from. These are plain data shapes the server and the client fill from the
 // engine's report (shared/engine) and the stock planner's plan (shared/planner) — see from-report.ts — so every
 // document and CSV below is a pure function of them and can be tested without a drawing.
@@ -88,18 +90,15 @@ export type ShopMeta = {
   paper: 'A4' | 'LETTER';
 };
 
-/** The order a supplier receives: bars by profile and length, or parts cut to length for a fee per cut. */
-export type OrderStockLine = { profileId: string; profileName: string; length_mm: number; qty: number; unitPrice: number; cost: number };
-export type OrderCutLine = { profileId: string; profileName: string; length_mm: number; qty: number; marks: string[] };
+/** The order a supplier receives: per profile, the planner's grouped order list (bars to buy, offcuts taken from the
+ * shelf, and the cut-to-length alternative), with totals across profiles. */
+export type OrderProfile = { profileId: string; profileName: string; order: PlannerOrderList };
 export type OrderList = {
   currency: string;
-  stock: OrderStockLine[];
+  profiles: OrderProfile[];
+  barsToBuy: number;
+  /** Bars bought (shelf offcuts cost nothing). */
   stockTotal: number;
-  cutToLength: OrderCutLine[];
-  /** Metres of profile bought cut to length, per profile. */
-  cutToLengthMetres: { profileId: string; profileName: string; metres: number; pricePerMetre: number | null; cost: number | null }[];
   cutCount: number;
-  feePerCut: number | null;
-  /** Material (where a price per metre is known) plus the cutting fee; null when a price is missing. */
-  cutToLengthTotal: number | null;
+  cutToLengthTotal: number;
 };

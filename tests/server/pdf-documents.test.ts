@@ -6,7 +6,8 @@ import { orderList } from '@shared/shop/order-list';
 import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
 import { drillListPdf, labelsPdf, orderListPdf, pickListPdf, sawListPdf } from '../../server/pdf';
-import { cutList, meta, plans } from '../shared/shop/fixtures';
+import { planCutsSync } from '@shared/planner';
+import { cutList, jobs, meta, plans } from '../shared/shop/fixtures';
 
 async function pdfText(buf: Buffer): Promise<{ text: string; pages: string[] }> {
   const parser = new PDFParse({ data: new Uint8Array(buf) });
@@ -80,11 +81,13 @@ describe('other shop documents', () => {
   });
 
   it('order list shows the bars with cost and the cut-to-length alternative', async () => {
-    const order = orderList(plans, cutList, 'EUR', { feePerCut: 1.5, pricePerMetre: { '40x40-s8': 9.5, '20x20-s6': 4 } });
+    const planned = jobs.map((j) => ({ ...j, plan: planCutsSync(j.job, { timeLimitMs: 200 }) }));
+    const order = orderList(planned, 'EUR', { cutFee: 1.5, pricePerMetre: { '40x40-s8': 9.5, '20x20-s6': 4 } });
     const { text } = await pdfText(await orderListPdf(order, meta, { supplier: 'Northgate Metals', reference: null, mode: 'stock' }));
     expect(text).toContain('Northgate Metals');
     expect(text).toContain('€84.00');
     expect(text).toContain('€119.46');
-    expect(text).toContain('14 cuts at €1.50');
+    expect(text).toContain('14 cuts');
+    expect(text).toContain('offcut on hand');
   });
 });

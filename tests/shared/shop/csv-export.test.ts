@@ -2,7 +2,8 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { cutListCsv, orderListCsv, toCsv } from '@shared/shop/csv-export';
 import { orderList } from '@shared/shop/order-list';
-import { cutList, plans } from './fixtures';
+import { planCutsSync } from '@shared/planner';
+import { cutList, jobs } from './fixtures';
 
 const cells = (csv: string): string[][] => Papa.parse<string[]>(csv.replace(/^\uFEFF/, ''), { skipEmptyLines: true }).data;
 
@@ -43,10 +44,11 @@ describe('CSV export', () => {
   });
 
   it('writes the order list with stock bars and the cut-to-length lines', () => {
-    const order = orderList(plans, cutList, 'EUR', { feePerCut: 1.5, pricePerMetre: {} });
+    const order = orderList(jobs.map((j) => ({ ...j, plan: planCutsSync(j.job, { timeLimitMs: 200 }) })), 'EUR', { cutFee: 1.5 });
     const rows = cells(orderListCsv(order));
     expect(rows[1]).toEqual(['stock bar', '40×40 slot 8', '6000', '2', '42', '84', '']);
+    expect(rows[2]).toEqual(['offcut on hand', '20×20 slot 6', '1200', '1', '0', '0', '']);
     expect(rows.filter((r) => r[0] === 'cut to length').length).toBe(4);
-    expect(rows.at(-1)).toEqual(['cutting fee', '', '', '14', '1.5', '21', '']);
+    expect(rows.at(-2)).toEqual(['total stock bars', '', '', '2', '', '84', '']);
   });
 });

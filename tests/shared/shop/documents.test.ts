@@ -1,10 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { drillSheet } from '@shared/shop/drill-list';
 import { partLabels } from '@shared/shop/labels';
+import { planCutsSync } from '@shared/planner';
+import { toProfilePlan } from '@shared/shop/from-plan';
 import { orderList, orderText } from '@shared/shop/order-list';
 import { pickSheet } from '@shared/shop/pick-list';
 import { barSegments, sawSheet } from '@shared/shop/saw-list';
-import { cutList, meta, plans } from './fixtures';
+import { cutList, jobs, meta, plans } from './fixtures';
 
 describe('saw sheet', () => {
   const sheet = sawSheet(cutList, plans, meta);
@@ -65,29 +67,46 @@ describe('drill list, pick list, labels', () => {
   });
 });
 
-describe('order list', () => {
-  const order = orderList(plans, cutList, 'EUR', { feePerCut: 1.5, pricePerMetre: { '40x40-s8': 9.5, '20x20-s6': 4 } });
+describe('order list (through the stock planner)', () => {
+  const planned = jobs.map((j) => ({ ...j, plan: planCutsSync(j.job, { timeLimitMs: 200 }) }));
+  const order = orderList(planned, 'EUR', { cutFee: 1.5, pricePerMetre: { '40x40-s8': 9.5, '20x20-s6': 4 } });
 
-  it('groups bought bars by profile and length and leaves shelf offcuts out', () => {
-    expect(order.stock).toEqual([{ profileId: '40x40-s8', profileName: '40×40 slot 8', length_mm: 6000, qty: 2, unitPrice: 42, cost: 84 }]);
+  it('buys the fewest bars and takes the shelf offcut first', () => {
+    // 40×40: 10 + 4×1120 + 4×850 + 4×520 + kerfs needs more than one 6000 mm bar, and two are enough (worked by hand
+    // in fixtures.ts), so 2 bars at 42.00 = 84.00; 20×20 comes from the 1200 mm offcut on hand.
+    expect(order.barsToBuy).toBe(2);
     expect(order.stockTotal).toBe(84);
+    const shelf = order.profiles[1].order.stock.lines;
+    expect(shelf).toEqual([expect.objectContaining({ stockLength: 1200, qty: 1, onHand: true })]);
   });
 
   it('prices the cut-to-length alternative (worked by hand)', () => {
-    // 40×40: 4×850 + 4×1120 + 4×520 = 9960 mm = 9.96 m × 9.50 = 94.62; 20×20: 0.96 m × 4.00 = 3.84;
-    // 14 cuts × 1.50 = 21.00; total 119.46
-    expect(order.cutToLengthMetres.map((m) => m.cost)).toEqual([3.84, 94.62]);
+    // per part: length in m × price per metre + 1.50 per cut
+    // 40×40: 4×(1.12×9.5+1.5) = 48.56; 4×(0.85×9.5+1.5) = 38.30; 4×(0.52×9.5+1.5) = 25.76 → 112.62
+    // 20×20: 2×(0.48×4+1.5) = 6.84; total 119.46 for 14 cuts
+    expect(order.profiles[0].order.cutToLength.cost).toBe(112.62);
     expect(order.cutCount).toBe(14);
     expect(order.cutToLengthTotal).toBe(119.46);
   });
 
-  it('leaves the alternative total open when a price is unknown', () => {
-    expect(orderList(plans, cutList, 'EUR', { feePerCut: null, pricePerMetre: {} }).cutToLengthTotal).toBeNull();
+  it('writes a plain-text order with the chosen way of buying first', () => {
+    const f = { lengthText: (mm: number) => `${mm} mm`, money: (v: number) => `€${v.toFixed(2)}`, heading: 'Order' };
+    const text = orderText(order, 'stock', f);
+    expect(text).toContain('2 × 40×40 slot 8, 6000 mm bars at €42.00 each = €84.00');
+    expect(text.indexOf('Stock bars to buy')).toBeLessThan(text.indexOf('cut to length'));
+    expect(text).not.toContain('1200 mm bars');
+    const alt = orderText(order, 'cut-to-length', f);
+    expect(alt.indexOf('Parts cut to length')).toBeLessThan(alt.indexOf('as stock bars'));
+    expect(alt).toContain('4 × 40×40 slot 8 cut to 1120 mm (part marks B)');
   });
 
-  it('writes a plain-text order', () => {
-    const text = orderText(order, { lengthText: (mm) => `${mm} mm`, money: (v) => `€${v.toFixed(2)}`, heading: 'Order' });
-    expect(text).toContain('2 × 40×40 slot 8, 6000 mm bars at €42.00 = €84.00');
-    expect(text).toContain('14 cuts at €1.50 per cut');
+  it('turns each plan into saw-list bars that respect the kerf convention', () => {
+    const p = toProfilePlan('40x40-s8', '40×40 slot 8', jobs[0].job, planned[0].plan);
+    for (const bar of p.bars) {
+      const used = 10 + bar.cuts.reduce((s, c) => s + c.length_mm, 0) + (bar.cuts.length - 1) * 3;
+      expect(used).toBeLessThanOrEqual(bar.stock_mm);
+    }
+    expect(p.bars.flatMap((b) => b.cuts.map((c) => c.mark)).sort().join('')).toBe('AAAABBBBCCCC');
+    expect(toProfilePlan('20x20-s6', '20×20 slot 6', jobs[1].job, planned[1].plan).bars[0].fromShelf).toBe(true);
   });
 });

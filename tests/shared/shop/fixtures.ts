@@ -1,3 +1,4 @@
+import type { CutJob } from '@shared/planner';
 import type { ProfilePlan, ShopCutList, ShopMeta } from '@shared/shop/types';
 
 // A small invented galley frame worked by hand: 40×40 uprights A, rails B (end connectors: tapped ends), cross-
@@ -112,3 +113,27 @@ export const meta: ShopMeta = {
   units: { display: 'mm', frac: 16 },
   paper: 'A4',
 };
+
+/** The same parts as planner jobs: 6000 mm bars at 42.00 for 40×40; one 1200 mm offcut on the shelf for 20×20. */
+export const jobs: { profileId: string; profileName: string; job: CutJob }[] = [
+  {
+    profileId: '40x40-s8',
+    profileName: '40×40 slot 8',
+    job: {
+      kerf: 3,
+      trim: 10,
+      minOffcut: 200,
+      stock: [{ length: 6000, price: 42 }],
+      parts: [
+        { length: 1120, qty: 4, label: 'B' },
+        { length: 850, qty: 4, label: 'A' },
+        { length: 520, qty: 4, label: 'C' },
+      ],
+    },
+  },
+  {
+    profileId: '20x20-s6',
+    profileName: '20×20 slot 6',
+    job: { kerf: 3, trim: 10, minOffcut: 200, stock: [{ length: 1200, qty: 1, price: 0 }], parts: [{ length: 480, qty: 2, label: 'D' }] },
+  },
+];

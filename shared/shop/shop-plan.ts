@@ -1,0 +1,56 @@
+import { planCuts, type CutJob, type StockInput } from '../planner';
+import type { FrameReport } from '../engine/report-types';
+import { shopCutList } from './from-report';
+import { toProfilePlan } from './from-plan';
+import type { PlannedProfile } from './order-list';
+import type { ProfilePlan, ShopCutList } from './types';
+
+/** A bar a supplier sells: for one profile, or (profileId null) for any profile they stock. */
+export type StockOffer = { profileId: string | null; length_mm: number; price: number };
+export type ShelfOffcut = { profileId: string; length_mm: number; qty: number };
+
+export type ShopSettings = {
+  /** Squaring cut at the start of each bar. */
+  trim_mm: number;
+  /** Shorter leftovers are waste; longer ones go back on the shelf. */
+  minOffcut_mm: number;
+};
+
+/** 6 m bars, the commonest metric stock length (DOMAIN.md), priced 0 when no supplier offers anything. */
+export const FALLBACK_STOCK_MM = 6000;
+
+export type ShopPlanResult = { cutList: ShopCutList; planned: PlannedProfile[]; plans: ProfilePlan[] };
+
+/** The stock planner's jobs for a frame: its parts per profile, the supplier's bars and the shelf's offcuts. */
+export function cutJobs(report: FrameReport, offers: readonly StockOffer[], shelf: readonly ShelfOffcut[], s: ShopSettings): { profileId: string; profileName: string; job: CutJob }[] {
+  const byProfile = new Map<string, { name: string; parts: CutJob['parts'] }>();
+  for (const l of report.cut_list) {
+    const e = byProfile.get(l.profile) ?? { name: l.profile_name, parts: [] };
+    e.parts.push({ length: l.cut_length_mm, qty: l.qty, label: l.mark });
+    byProfile.set(l.profile, e);
+  }
+  return [...byProfile].map(([profileId, e]) => {
+    const longest = Math.max(...e.parts.map((p) => p.length));
+    const shortest = Math.min(...e.parts.map((p) => p.length));
+    const bought: StockInput[] = offers.filter((o) => o.profileId === profileId).map((o) => ({ length: o.length_mm, price: o.price }));
+    const general: StockInput[] = offers.filter((o) => o.profileId === null).map((o) => ({ length: o.length_mm, price: o.price }));
+    let stock = bought.length ? bought : general;
+    if (!stock.some((x) => x.length - s.trim_mm >= longest)) stock = [...stock, { length: Math.max(FALLBACK_STOCK_MM, Math.ceil(longest + s.trim_mm)), price: 0 }];
+    const onShelf: StockInput[] = shelf
+      .filter((o) => o.profileId === profileId && o.qty > 0 && o.length_mm >= s.trim_mm + shortest)
+      .map((o) => ({ length: o.length_mm, qty: o.qty, price: 0, label: 'offcut on hand' }));
+    return {
+      profileId,
+      profileName: e.name,
+      job: { kerf: report.settings.kerf_mm, trim: s.trim_mm, minOffcut: s.minOffcut_mm, stock: [...onShelf, ...stock], parts: e.parts },
+    };
+  });
+}
+
+/** Cut list, planner jobs and plans for a frame in one go (the planner runs per profile, time-limited). */
+export async function planShop(report: FrameReport, offers: readonly StockOffer[], shelf: readonly ShelfOffcut[], s: ShopSettings, timeLimitMs = 1500): Promise<ShopPlanResult> {
+  const cutList = shopCutList(report);
+  const planned: PlannedProfile[] = [];
+  for (const j of cutJobs(report, offers, shelf, s)) planned.push({ ...j, plan: await planCuts(j.job, { timeLimitMs }) });
+  return { cutList, planned, plans: planned.map((p) => toProfilePlan(p.profileId, p.profileName, p.job, p.plan)) };
+}
