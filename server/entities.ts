@@ -4,7 +4,14 @@ import { Project } from './modules/projects/project.entity';
 import { User } from './modules/users/user.entity';
 import { Membership } from './modules/workshops/membership.entity';
 import { Workshop } from './modules/workshops/workshop.entity';
+import { Attachment } from './modules/attachments/attachment.entity';
+import { CutSession } from './modules/cutting/cut-session.entity';
+import { CutTick } from './modules/cutting/cut-tick.entity';
+import { Order } from './modules/orders/order.entity';
+import { CustomProfile } from './modules/stock/custom-profile.entity';
+import { StockOffcut } from './modules/stock/stock-offcut.entity';
+import { Supplier } from './modules/suppliers/supplier.entity';
 
 /** Every entity the ORM knows, listed explicitly (no folder scanning). */
-export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision];
+export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment];
 export { Frame, FrameRevision, Membership, Project, User, Workshop };
