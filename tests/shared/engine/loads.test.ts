@@ -1,0 +1,131 @@
+import { describe, expect, it } from 'vitest';
+import { resolveProfile, sectionOf } from '@shared/catalog/profiles';
+import { computeReport } from '@shared/engine/report';
+import type { FrameReport } from '@shared/engine/report-types';
+import { parseFrameDocument } from '@shared/model/parse';
+import { boxFrame, member, module } from './frames';
+
+// Beam formulas: American Wood Council Design Aid No. 6 (Fig. 1 simple beam UDL, Fig. 9 two equal loads
+// symmetrically placed, Fig. 14 cantilever load at any point) and AISC Steel Construction Manual Table 3-23
+// (cases 1, 9, 15, 22). Standard gravity 9.80665 m/s² (CGPM 1901).
+const g = 9.80665;
+const s40 = sectionOf(resolveProfile('40x40-s8'));
+const EI = s40.E_MPa * s40.Ix_mm4;
+const check = (r: FrameReport, id: string) => r.loads.members.find((m) => m.member_id === id);
+const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
+
+describe('a module on the top rails of the hand-worked box', () => {
+  // A 20 kg module 920 mm wide over the whole top: shared by the two rails R1, R2 (equal share), each carrying
+  // a UDL over its full 920 mm span between the uprights, times the shock factor 2.5.
+  const doc = boxFrame({ modules: [module('box', [920, 500, 100], 20, [40, 0, 800])] });
+  const r = computeReport(doc);
+  const L = 920;
+  const W = (20 * g * 2.5) / 2;
+  const w = W / L;
+
+  it('reproduces the simply supported UDL by hand: δ = 5wL⁴/384EI, M = wL²/8 (fixed ends: wL⁴/384EI, wL²/12)', () => {
+    const c = check(r, 'R1');
+    expect(c?.load_N).toBeCloseTo(W, 2);
+    const [span] = c?.spans ?? [];
+    expect(span.span_mm).toBe(L);
+    expect(rel(span.deflection_mm, (5 * w * L ** 4) / (384 * EI))).toBeLessThan(1e-4);
+    expect(rel(span.moment_Nmm, (w * L * L) / 8)).toBeLessThan(1e-4);
+    expect(rel(span.deflection_fixed_mm as number, (w * L ** 4) / (384 * EI))).toBeLessThan(1e-4);
+    expect(rel(span.moment_fixed_Nmm as number, (w * L * L) / 12)).toBeLessThan(1e-4);
+    // Stress σ = M/W; limits span/240 and yield/1.65 (6063-T5 design minimum 16 ksi ≈ 110 MPa, ADM Table A.3.4).
+    expect(rel(span.stress_MPa, (w * L * L) / 8 / s40.Wx_mm3)).toBeLessThan(1e-4);
+    expect(span.limit_mm).toBeCloseTo(L / 240, 3);
+    expect(span.allowable_MPa).toBeCloseTo(110 / 1.65, 3);
+    const u = Math.max(span.deflection_mm / (L / 240), span.stress_MPa / (110 / 1.65));
+    expect(c?.utilisation).toBeCloseTo(u, 4);
+  });
+
+  it('passes the reactions down to the uprights: each takes a quarter of the factored weight', () => {
+    const axial = r.loads.uprights.map((u) => u.axial_N);
+    expect(axial).toHaveLength(4);
+    for (const a of axial) expect(a).toBeCloseTo((20 * g * 2.5) / 4, 2);
+  });
+
+  it('scales with the shock factor', () => {
+    const still = computeReport(boxFrame({ settings: { shockFactor: 1 }, modules: [module('box', [920, 500, 100], 20, [40, 0, 800])] }));
+    expect(check(r, 'R1')?.spans[0].deflection_mm).toBeCloseTo(2.5 * (check(still, 'R1')?.spans[0].deflection_mm as number), 4);
+  });
+});
+
+describe('other load cases against the tables', () => {
+  it('a module hung from a rail: two equal loads symmetrically placed, δ = Pa(3L² − 4a²)/24EI (AWC DA6 Fig. 9)', () => {
+    // A 300 mm wide module hung centrally under R1 (L = 920): hangers at a = (920 − 300)/2 = 310 from each end.
+    const doc = parseFrameDocument({
+      schemaVersion: 1,
+      settings: { shockFactor: 1 },
+      members: [member('U1', 'z', 0, 800, { x: 0, y: 0 }), member('U2', 'z', 0, 800, { x: 960, y: 0 }), member('R1', 'x', 40, 960, { y: 0, z: 760 })],
+      modules: [module('sink', [300, 40, 150], 12, [350, 0, 610], { bearing: 'hung' })],
+    });
+    const r = computeReport(doc);
+    const [L, a, P] = [920, 310, (12 * g) / 2];
+    const c = check(r, 'R1');
+    expect(rel(c?.spans[0].deflection_mm as number, (P * a * (3 * L * L - 4 * a * a)) / (24 * EI))).toBeLessThan(1e-4);
+    expect(rel(c?.spans[0].moment_Nmm as number, P * a)).toBeLessThan(1e-4);
+  });
+
+  it('a bracket arm with a load at its tip: a cantilever, δ = PL³/3EI (AWC DA6 Fig. 14), limit 2L/N', () => {
+    // Arm R butts into upright U at its start and is free at the end, 400 mm out; a narrow 5 kg module at the tip.
+    const doc = parseFrameDocument({
+      schemaVersion: 1,
+      settings: { shockFactor: 1 },
+      members: [member('U', 'z', 0, 800, { x: 0, y: 0 }), member('R', 'x', 40, 440, { y: 0, z: 500 })],
+      modules: [module('lamp', [0.8, 40, 50], 5, [439.2, 0, 540])],
+    });
+    const r = computeReport(doc);
+    const c = check(r, 'R');
+    // Narrower than 1 mm, it bears as a point load at the centre of its contact: 399.6 mm from the support.
+    const [P, a] = [5 * g, 399.6];
+    expect(c?.spans[0].support).toBe('cantilever');
+    // Deflection at the free end, load at a from the fixed end: Pa²(3L − a)/6EI; at a = L this is PL³/3EI.
+    expect(rel(c?.spans[0].deflection_mm as number, (P * a ** 2 * (3 * 400 - a)) / (6 * EI))).toBeLessThan(1e-4);
+    expect(rel(c?.spans[0].moment_Nmm as number, P * a)).toBeLessThan(1e-6);
+    expect(c?.spans[0].limit_mm).toBeCloseTo((2 * 400) / 240, 3);
+  });
+
+  it('bearers pass their reactions to the rails they butt into (statics: a module centred between them)', () => {
+    // Two bearers along y between the front and back rails, carrying a centred module: each rail gets half of
+    // each bearer's load; everything reaches the uprights.
+    const doc = parseFrameDocument({
+      schemaVersion: 1,
+      settings: { shockFactor: 1 },
+      members: [
+        member('U1', 'z', 0, 800, { x: 0, y: 0 }),
+        member('U2', 'z', 0, 800, { x: 960, y: 0 }),
+        member('U3', 'z', 0, 800, { x: 0, y: 460 }),
+        member('U4', 'z', 0, 800, { x: 960, y: 460 }),
+        member('F', 'x', 40, 960, { y: 0, z: 300 }),
+        member('B', 'x', 40, 960, { y: 460, z: 300 }),
+        member('b1', 'y', 40, 460, { x: 300, z: 300 }),
+        member('b2', 'y', 40, 460, { x: 660, z: 300 }),
+      ],
+      modules: [module('tank', [400, 300, 300], 40, [280, 100, 340])],
+    });
+    const r = computeReport(doc);
+    const total = 40 * g;
+    expect(r.modules[0].bears_on.map((b) => b.member_id)).toEqual(['b1', 'b2']);
+    expect(check(r, 'F')?.load_N).toBeCloseTo(total / 2, 2);
+    expect(check(r, 'B')?.load_N).toBeCloseTo(total / 2, 2);
+    expect(r.loads.uprights.reduce((s, u) => s + u.axial_N, 0)).toBeCloseTo(total, 2);
+  });
+
+  it('flags a member over its limit and a module that bears on nothing', () => {
+    const heavy = computeReport(boxFrame({ modules: [module('anvil', [920, 500, 100], 900, [40, 0, 800])] }));
+    expect(heavy.warnings.find((w) => w.code === 'over-utilised' && w.member_id === 'R1')).toBeDefined();
+    expect(heavy.loads.max_utilisation).toBeGreaterThan(1);
+    const floating = computeReport(boxFrame({ modules: [module('cloud', [100, 100, 100], 5, [300, 200, 1500])] }));
+    expect(floating.warnings.find((w) => w.code === 'module-unsupported')?.module_id).toBe('cloud');
+  });
+
+  it('carries the cautions with every report', () => {
+    const r = computeReport(boxFrame());
+    expect(r.cautions.join(' ')).toMatch(/not an engineering approval/);
+    expect(r.cautions.join(' ')).toMatch(/vehicle regulations/);
+    expect(r.cautions.join(' ')).toMatch(/vehicle maker allows/);
+    expect(r.loads.shock_factor_note).toMatch(/common practice/);
+  });
+});
