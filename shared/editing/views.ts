@@ -61,12 +61,12 @@ export function normaliseRect(ax: number, ay: number, bx: number, by: number): R
 }
 
 /**
- * The small projected preview: an isometric-style axonometric with x running down-right, y up-right (into the
- * picture) and z straight up, so the front face of the frame faces the viewer's left. Returns 2D picture
- * coordinates (mm, y up) and a depth for painter's order (larger = nearer).
+ * The small projected preview: an isometric view from the front, right and above (the eye along (1, −1, 1)), so
+ * the front, right-hand and top faces show. +x runs down-right, +y up-right (into the picture), +z straight up.
+ * Returns picture coordinates (mm, w up) and a depth for painter's order (larger = nearer the eye).
  */
 export function axonometric(p: { x: number; y: number; z: number }): { u: number; w: number; depth: number } {
   const c = Math.cos(Math.PI / 6);
   const s = Math.sin(Math.PI / 6);
-  return { u: (p.x + p.y) * c, w: p.z + (p.y - p.x) * s, depth: p.x - p.y - p.z * 0.001 };
+  return { u: (p.x + p.y) * c, w: p.z + (p.y - p.x) * s, depth: p.x - p.y + p.z };
 }

@@ -1,0 +1,270 @@
+import { computed, ref, shallowRef, triggerRef } from 'vue';
+import { defineStore } from 'pinia';
+import type { Frame, VersionConflictCurrent } from '@shared/api';
+import { applyChange, diffDocuments, isEmptyChange, touchedIds, type Change } from '@shared/editing/change';
+import { createHistory } from '@shared/editing/history';
+import { emptyScene, type Scene } from '@shared/editing/scene';
+import { sceneFromReport } from '@shared/editing/scene-from-report';
+import { diffReports, type WhatChanged } from '@shared/engine/diff';
+import { computeReport, type FrameReport } from '@shared/engine/report';
+import { InputError } from '@shared/errors';
+import type { FrameDocument } from '@shared/model/frame-document';
+import { parseFrameDocument } from '@shared/model/parse';
+import { useApi } from '@/api';
+import { useDocumentSaving } from './document-saving';
+
+export type Selection = { members: readonly string[]; modules: readonly string[] };
+const NOTHING: Selection = { members: [], modules: [] };
+
+/** A change the engine refused, with its reason (e.g. a member cut back to nothing). */
+export type Refusal = { label: string; message: string; field: string | null };
+
+export type ApplyOptions = {
+  /** Show a "what changed" summary of the parts afterwards (swaps and resizes). */
+  summarise?: boolean;
+  /** Select these afterwards. */
+  select?: Selection;
+};
+
+/**
+ * The open frame: its document, the engine's report on it, the selection, and the history. Every edit goes
+ * through `apply(change)`: the engine runs on the new document first, and a document it cannot resolve is
+ * refused with the reason, leaving the last good one in place. Saving is in document-saving.ts.
+ */
+export const useDocumentStore = defineStore('document', () => {
+  const api = useApi();
+  const frameId = ref<string | null>(null);
+  const doc = shallowRef<FrameDocument | null>(null);
+  const report = shallowRef<FrameReport | null>(null);
+  const scene = shallowRef<Scene>(emptyScene());
+  /** The document could not be read at all (it was saved by a newer build, or damaged). */
+  const loadError = ref<string | null>(null);
+  const readOnly = ref(true);
+  const selection = shallowRef<Selection>(NOTHING);
+  const refusal = shallowRef<Refusal | null>(null);
+  const summary = shallowRef<{ label: string; changes: WhatChanged } | null>(null);
+  /** How long the last engine run took (ms): the results panels debounce when it is slow. */
+  const engineMs = ref(0);
+  /** Bumped on every applied change, so views can watch one number. */
+  const revision = ref(0);
+
+  const history = createHistory();
+  const historyTick = ref(0);
+  const canUndo = computed(() => (historyTick.value, history.canUndo()));
+  const canRedo = computed(() => (historyTick.value, history.canRedo()));
+  const undoLabel = computed(() => (historyTick.value, history.undoLabel()));
+  const redoLabel = computed(() => (historyTick.value, history.redoLabel()));
+
+  const saving = useDocumentSaving({
+    save: (id, baseVersion, document) => api.frames.saveDocument(id, { baseVersion, document: document as unknown as Record<string, unknown> }),
+    current: () => (frameId.value && doc.value ? { frameId: frameId.value, doc: doc.value } : null),
+  });
+
+  function run(next: FrameDocument): { report: FrameReport; scene: Scene } {
+    const t0 = performance.now();
+    const r = computeReport(next, report.value ? { previous: report.value } : {});
+    const s = sceneFromReport(next, r);
+    engineMs.value = performance.now() - t0;
+    return { report: r, scene: s };
+  }
+
+  /** Open a frame as loaded from the server. */
+  function open(frame: Frame, canWrite: boolean): void {
+    frameId.value = frame.id;
+    history.clear();
+    historyTick.value++;
+    selection.value = NOTHING;
+    summary.value = null;
+    refusal.value = null;
+    report.value = null;
+    readOnly.value = !canWrite;
+    try {
+      const parsed = parseFrameDocument(frame.document);
+      const result = run(parsed);
+      doc.value = parsed;
+      report.value = result.report;
+      scene.value = result.scene;
+      loadError.value = null;
+    } catch (e) {
+      doc.value = null;
+      scene.value = emptyScene();
+      loadError.value = e instanceof Error ? e.message : String(e);
+      readOnly.value = true;
+    }
+    saving.reset(frame.version, doc.value);
+    revision.value++;
+  }
+
+  function close(): void {
+    void saving.flush();
+    frameId.value = null;
+    doc.value = null;
+    report.value = null;
+    scene.value = emptyScene();
+    history.clear();
+    selection.value = NOTHING;
+  }
+
+  function keepSelectionValid(next: Scene): void {
+    const members = new Set(next.members.map((m) => m.id));
+    const modules = new Set(next.modules.map((m) => m.id));
+    const s = selection.value;
+    if (s.members.every((id) => members.has(id)) && s.modules.every((id) => modules.has(id))) return;
+    selection.value = { members: s.members.filter((id) => members.has(id)), modules: s.modules.filter((id) => modules.has(id)) };
+  }
+
+  /** Apply without touching the history (undo, redo and history-merging callers use this). */
+  function commit(change: Change, opts: ApplyOptions): boolean {
+    if (!doc.value || isEmptyChange(change)) return false;
+    const next = applyChange(doc.value, change);
+    const before = report.value;
+    let result: { report: FrameReport; scene: Scene };
+    try {
+      result = run(next);
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      refusal.value = { label: change.label, message: e.message, field: e.field };
+      return false;
+    }
+    doc.value = next;
+    report.value = result.report;
+    scene.value = result.scene;
+    refusal.value = null;
+    if (opts.summarise && before) summary.value = { label: change.label, changes: diffReports(before, result.report) };
+    if (opts.select) selection.value = opts.select;
+    keepSelectionValid(result.scene);
+    revision.value++;
+    saving.schedule();
+    return true;
+  }
+
+  /** The one way to change the document. Returns false when the engine refused it (see `refusal`). */
+  function apply(change: Change, opts: ApplyOptions = {}): boolean {
+    if (readOnly.value) return false;
+    const ok = commit(change, opts);
+    if (ok) {
+      history.record(change);
+      historyTick.value++;
+    }
+    return ok;
+  }
+
+  /** Apply an edit written as document → document. */
+  function edit(label: string, f: (d: FrameDocument) => FrameDocument, opts: ApplyOptions = {}): boolean {
+    if (!doc.value) return false;
+    return apply(diffDocuments(doc.value, f(doc.value), label), opts);
+  }
+
+  function undo(): void {
+    if (readOnly.value) return;
+    const c = history.undo();
+    historyTick.value++;
+    if (c && !commit(c, { select: selectionAfter(c) })) {
+      // The inverse no longer applies cleanly (should not happen); keep the step so nothing is lost.
+      history.redo();
+      historyTick.value++;
+    }
+  }
+
+  function redo(): void {
+    if (readOnly.value) return;
+    const c = history.redo();
+    historyTick.value++;
+    if (c && !commit(c, { select: selectionAfter(c) })) {
+      history.undo();
+      historyTick.value++;
+    }
+  }
+
+  /** After undo or redo, select what the step touched, so the builder sees what came back. */
+  function selectionAfter(c: Change): Selection {
+    const t = touchedIds(c);
+    return { members: [...t.members], modules: [...t.modules] };
+  }
+
+  /** Open a group of changes that undo as one (a drag, a dialog's several edits). */
+  const beginGesture = () => history.begin();
+  const endGesture = (label?: string) => {
+    history.end(label);
+    historyTick.value++;
+  };
+
+  function select(next: Selection): void {
+    selection.value = next;
+  }
+  const clearSelection = () => select(NOTHING);
+
+  /**
+   * Someone else saved first. Take theirs: their document replaces ours as one undoable step, so our version is
+   * still one undo away (and can be saved on top later).
+   */
+  function takeTheirs(current: VersionConflictCurrent): void {
+    if (!doc.value) return;
+    let theirs: FrameDocument;
+    try {
+      theirs = parseFrameDocument(current.document);
+    } catch (e) {
+      refusal.value = { label: 'Take their version', message: e instanceof Error ? e.message : String(e), field: null };
+      return;
+    }
+    saving.adoptVersion(current.version, theirs);
+    const change = diffDocuments(doc.value, theirs, 'Take the saved version');
+    if (!isEmptyChange(change) && commit(change, {})) {
+      history.record(change);
+      historyTick.value++;
+    }
+    // Their document is what the server holds: nothing to save until the next edit.
+    saving.markSaved(doc.value);
+  }
+
+  /** Keep ours: save it on top of theirs (theirs stays in the saved versions). */
+  function keepMine(current: VersionConflictCurrent): void {
+    saving.adoptVersion(current.version, null);
+    saving.schedule(0);
+  }
+
+  function dismissSummary(): void {
+    summary.value = null;
+  }
+  function dismissRefusal(): void {
+    refusal.value = null;
+  }
+  /** Re-draw after something outside the document changed (display units). */
+  function touch(): void {
+    triggerRef(scene);
+  }
+
+  return {
+    frameId,
+    doc,
+    report,
+    scene,
+    loadError,
+    readOnly,
+    selection,
+    refusal,
+    summary,
+    engineMs,
+    revision,
+    canUndo,
+    canRedo,
+    undoLabel,
+    redoLabel,
+    saving,
+    open,
+    close,
+    apply,
+    edit,
+    undo,
+    redo,
+    beginGesture,
+    endGesture,
+    select,
+    clearSelection,
+    takeTheirs,
+    keepMine,
+    dismissSummary,
+    dismissRefusal,
+    touch,
+  };
+});
