@@ -5,6 +5,7 @@ import { pathToFileURL } from 'node:url';
 import bcrypt from 'bcryptjs';
 import type { FrameDocumentJson } from '@shared/api/frames';
 import type { Role } from '@shared/api/roles';
+import { demoFrameDocument } from '@shared/model/demo-frame';
 import { loadConfig } from '../server/config';
 import { createOrm, type Orm } from '../server/db';
 import { checkFrameDocument } from '../server/modules/frames/frame-document';
@@ -26,9 +27,9 @@ export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] 
   { email: 'lee@slotwright.test', name: 'Lee Marsh', role: 'viewer' },
 ];
 
-/** The demo frame's document. A minimal valid document until the engine's demo builder is available. */
-function demoFrameDocument(): FrameDocumentJson {
-  return { schemaVersion: 1, name: DEMO_FRAME, members: [] };
+/** The demo frame's document: the engine's invented rear kitchen pod (shared/model/demo-frame.ts). */
+function demoFrameJson(): FrameDocumentJson {
+  return { ...demoFrameDocument(), name: DEMO_FRAME } as unknown as FrameDocumentJson;
 }
 
 /** Creates the demo data unless the demo workshop exists; returns whether it created anything. */
@@ -50,7 +51,7 @@ export async function seedDemoData(orm: Orm): Promise<boolean> {
       client: 'Lee Marsh',
       notes: 'Galley behind the rear seats: 65 L compressor fridge, sink with 20 L water tank, drawer stack. Invented demo job.',
     });
-    const { document, memberCount } = checkFrameDocument(demoFrameDocument());
+    const { document, memberCount } = checkFrameDocument(demoFrameJson());
     em.create(Frame, {
       project,
       name: DEMO_FRAME,
