@@ -50,46 +50,66 @@ function betterContact(c: Contact, best: Contact | null): boolean {
   return c.other < best.other;
 }
 
-/** What each member end touches, found through a spatial hash. */
+/** What each member end touches, found through a spatial hash. Plain loops: this runs for every end on every edit. */
 function findContacts(members: readonly MemberGeometry[]): (Contact | null)[][] {
+  const n = members.length;
   let largest = 0;
   for (const m of members) largest = Math.max(largest, m.info.profile.width_mm, m.info.profile.height_mm);
-  const hash = new SpatialHash(Math.max(100, 2 * largest), members.length);
-  members.forEach((m, i) => hash.insert(i, m.drawn));
-
-  return members.map((m, i) => {
+  const hash = new SpatialHash(Math.max(100, 2 * largest), n);
+  for (let i = 0; i < n; i++) hash.insert(i, members[i].drawn);
+  const region: Box = { min: [0, 0, 0], max: [0, 0, 0] };
+  const found: number[] = [];
+  const out: (Contact | null)[][] = [];
+  for (let i = 0; i < n; i++) {
+    const m = members[i];
+    const mb = m.drawn;
     const a = ai(m.axis);
-    const [p, q] = crossAxes(m.axis).map(ai);
-    return END_NAMES.map((end) => {
-      const s = endCoord(m.drawn, a, end);
-      const region = cloneBox(m.drawn);
+    const [pa, qa] = crossAxes(m.axis);
+    const p = ai(pa);
+    const q = ai(qa);
+    const ends: (Contact | null)[] = [null, null];
+    for (let k = 0; k < 2; k++) {
+      const atEnd = k === 1;
+      const s = atEnd ? mb.max[a] : mb.min[a];
+      for (let c = 0; c < 3; c++) {
+        region.min[c] = mb.min[c];
+        region.max[c] = mb.max[c];
+      }
       region.min[a] = s - TOUCH_MM;
       region.max[a] = s + TOUCH_MM;
       let best: Contact | null = null;
-      for (const j of hash.query(region)) {
+      const count = hash.query(region, found);
+      for (let f = 0; f < count; f++) {
+        const j = found[f];
         if (j === i) continue;
-        const n = members[j];
-        const nb = n.drawn;
-        const op = overlapOn(m.drawn, nb, p);
-        const oq = overlapOn(m.drawn, nb, q);
-        if (op <= TOUCH_MM || oq <= TOUCH_MM) continue;
+        const other = members[j];
+        const nb = other.drawn;
+        const op = overlapOn(mb, nb, p);
+        if (op <= TOUCH_MM) continue;
+        const oq = overlapOn(mb, nb, q);
+        if (oq <= TOUCH_MM) continue;
         if (nb.min[a] > s + TOUCH_MM || nb.max[a] < s - TOUCH_MM) continue;
+        const area = op * oq;
         let c: Contact;
-        if (n.axis === m.axis) {
-          const touching = end === 'end' ? Math.abs(nb.min[a] - s) <= TOUCH_MM : Math.abs(nb.max[a] - s) <= TOUCH_MM;
+        if (other.axis === m.axis) {
+          const touching = atEnd ? Math.abs(nb.min[a] - s) <= TOUCH_MM : Math.abs(nb.max[a] - s) <= TOUCH_MM;
           if (!touching) continue;
-          c = { kind: 'inline', other: j, otherEnd: end === 'end' ? 'start' : 'end', area: op * oq };
+          c = { kind: 'inline', other: j, otherEnd: atEnd ? 'start' : 'end', area };
         } else {
-          const b = ai(n.axis);
-          const inside = (v: number) => v >= m.drawn.min[b] - TOUCH_MM && v <= m.drawn.max[b] + TOUCH_MM;
-          const otherEnd: EndName | null = inside(nb.min[b]) ? 'start' : inside(nb.max[b]) ? 'end' : null;
-          c = { kind: otherEnd ? 'corner' : 'face', other: j, otherEnd, area: op * oq };
+          // Is one of the other member's ends inside this member's cross-section (a corner) or not (a T)?
+          const b = ai(other.axis);
+          const lo = mb.min[b] - TOUCH_MM;
+          const hi = mb.max[b] + TOUCH_MM;
+          const otherEnd: EndName | null = nb.min[b] >= lo && nb.min[b] <= hi ? 'start' : nb.max[b] >= lo && nb.max[b] <= hi ? 'end' : null;
+          c = { kind: otherEnd ? 'corner' : 'face', other: j, otherEnd, area };
         }
         if (betterContact(c, best)) best = c;
       }
-      return best;
-    });
-  });
+      ends[k] = best;
+    }
+    out.push(ends);
+  }
+  return out;
 }
 
 /**

@@ -38,19 +38,30 @@ export class SpatialHash {
     });
   }
 
-  /** Ids of boxes sharing a cell with `box`, each once, in ascending order. */
-  query(box: Box): number[] {
+  /**
+   * Ids of boxes sharing a cell with `box`, each once, written into `out` (reused between calls to spare the
+   * garbage collector); returns how many. The order is not meaningful.
+   */
+  query(box: Box, out: number[]): number {
     this.round += 1;
-    const out: number[] = [];
-    this.each(box, (key) => {
-      const list = this.cells.get(key);
-      if (!list) return;
-      for (const id of list) {
-        if (this.stamp[id] === this.round) continue;
-        this.stamp[id] = this.round;
-        out.push(id);
+    let count = 0;
+    const [x0, x1] = this.range(box.min[0], box.max[0]);
+    const [y0, y1] = this.range(box.min[1], box.max[1]);
+    const [z0, z1] = this.range(box.min[2], box.max[2]);
+    for (let x = x0; x <= x1; x++) {
+      for (let y = y0; y <= y1; y++) {
+        for (let z = z0; z <= z1; z++) {
+          const list = this.cells.get(cellKey(x, y, z));
+          if (!list) continue;
+          for (let k = 0; k < list.length; k++) {
+            const id = list[k];
+            if (this.stamp[id] === this.round) continue;
+            this.stamp[id] = this.round;
+            out[count++] = id;
+          }
+        }
       }
-    });
-    return out.sort((a, b) => a - b);
+    }
+    return count;
   }
 }
