@@ -58,7 +58,8 @@ describe('report properties (fast-check)', () => {
       fc.property(edits, (list) => {
         const r = computeReport(apply(base, list));
         expect(r.mass.frame_kg + r.mass.hardware_kg + r.mass.modules_kg).toBeCloseTo(r.mass.total_kg, 4);
-        expect(r.members.reduce((s, m) => s + m.mass_kg, 0)).toBeCloseTo(r.mass.frame_kg, 4);
+        // Each member's mass is printed to 0.01 g, so 44 of them may add up to a few hundredths of a gram off.
+        expect(r.members.reduce((s, m) => s + m.mass_kg, 0)).toBeCloseTo(r.mass.frame_kg, 3);
         // Modules: the demo's masses, with the 30 L tank full at 1 kg/L: 12 + 32 + 33 + 12 = 89 kg.
         expect(r.mass.modules_kg).toBeCloseTo(89, 9);
       }),
