@@ -35,6 +35,11 @@ describe('demo seed', () => {
       expect(projects.map((p) => p.name)).toEqual([DEMO_PROJECT]);
       const project = projectDetailSchema.parse((await client.get(`/api/projects/${projects[0].id}`).expect(200)).body);
       expect(project.frames.map((f) => [f.name, f.version])).toEqual([[DEMO_FRAME, 1]]);
+      // The demo frame is the document model's demo kitchen pod: a real frame, not an empty one.
+      const frame = (await client.get(`/api/frames/${project.frames[0].id}`).expect(200)).body as { document: { members: unknown[]; modules: unknown[] }; memberCount: number };
+      expect(frame.memberCount).toBe(frame.document.members.length);
+      expect(frame.memberCount).toBeGreaterThan(0);
+      expect(frame.document.modules.length).toBeGreaterThan(0);
     }
   }, 60_000);
 });
