@@ -15,6 +15,12 @@ import { framesRouter } from './modules/frames/frames.routes';
 import { healthRouter } from './modules/health/health.routes';
 import { projectsRouter } from './modules/projects/projects.routes';
 import { workshopsRouter } from './modules/workshops/workshops.routes';
+import { attachmentsRouter } from './modules/attachments/attachments.routes';
+import { cuttingRouter } from './modules/cutting/cutting.routes';
+import { ordersRouter } from './modules/orders/orders.routes';
+import { outboxRouter } from './modules/outbox/outbox.routes';
+import { stockRouter } from './modules/stock/stock.routes';
+import { suppliersRouter } from './modules/suppliers/suppliers.routes';
 
 export interface Services {
   orm: Orm;
@@ -82,6 +88,12 @@ export function createApp(services: Services): Express {
   api.use(workshopsRouter(orm));
   api.use(projectsRouter(orm));
   api.use(framesRouter(orm));
+  api.use(suppliersRouter(orm));
+  api.use(ordersRouter(orm, config));
+  api.use(cuttingRouter(orm));
+  api.use(stockRouter(orm));
+  api.use(attachmentsRouter(orm));
+  api.use(outboxRouter(orm, config));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

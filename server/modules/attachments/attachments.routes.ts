@@ -1,0 +1,90 @@
+import { Router } from 'express';
+import { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, attachmentParamsSchema, type AttachmentView } from '@shared/api/shop';
+import { projectParamsSchema } from '@shared/api/projects';
+import type { Orm } from '../../db';
+import { NotFoundError, ValidationError } from '../../errors';
+import { currentUserId } from '../../http/current-user';
+import { parseInput } from '../../validate';
+import { authorizeProject } from '../access/access.service';
+import { singleFile } from '../orders/upload';
+import { User } from '../users/user.entity';
+import { Attachment, type AttachmentEntity } from './attachment.entity';
+
+// Photos and PDF data sheets on a project. The type is decided from the file's first bytes, not from what the
+// browser claims, and only members of the project's workshop can fetch one.
+
+const MAX_PER_PROJECT = 200;
+
+/** JPEG, PNG, WebP or PDF by magic number; null for anything else. */
+export function sniffType(b: Buffer): (typeof ATTACHMENT_TYPES)[number] | null {
+  if (b.length >= 3 && b[0] === 0xff && b[1] === 0xd8 && b[2] === 0xff) return 'image/jpeg';
+  if (b.length >= 8 && b.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))) return 'image/png';
+  if (b.length >= 12 && b.subarray(0, 4).toString('latin1') === 'RIFF' && b.subarray(8, 12).toString('latin1') === 'WEBP') return 'image/webp';
+  if (b.length >= 5 && b.subarray(0, 5).toString('latin1') === '%PDF-') return 'application/pdf';
+  return null;
+}
+
+const view = (a: AttachmentEntity): AttachmentView => ({
+  id: a.id,
+  filename: a.filename,
+  contentType: a.contentType,
+  size: a.size,
+  createdAt: a.createdAt.toISOString(),
+  uploadedBy: a.uploadedBy ? { id: a.uploadedBy.id, name: a.uploadedBy.name } : null,
+});
+
+function cleanName(name: string): string {
+  const base = Buffer.from(name, 'latin1').toString('utf8');
+  return base.replace(/[\\/\0\r\n"]+/g, '_').trim().slice(0, 150) || 'file';
+}
+
+export function attachmentsRouter(orm: Orm): Router {
+  const router = Router();
+
+  router.get('/projects/:projectId/attachments', async (req, res) => {
+    const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
+    await authorizeProject(orm.em, currentUserId(req), projectId, 'read');
+    const rows = await orm.em.find(Attachment, { project: projectId }, { orderBy: { createdAt: 'desc' }, populate: ['uploadedBy'] });
+    res.json(rows.map(view));
+  });
+
+  router.post('/projects/:projectId/attachments', singleFile('file', MAX_ATTACHMENT_BYTES), async (req, res) => {
+    const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
+    const userId = currentUserId(req);
+    const { project } = await authorizeProject(orm.em, userId, projectId, 'project.write');
+    const file = req.file;
+    if (!file || file.size === 0) throw new ValidationError({ file: 'Choose a photo or PDF to attach' });
+    const type = sniffType(file.buffer);
+    if (!type) throw new ValidationError({ file: 'Only JPEG, PNG or WebP photos and PDF files can be attached' });
+    if ((await orm.em.count(Attachment, { project: projectId })) >= MAX_PER_PROJECT) throw new ValidationError({ file: `A project holds at most ${MAX_PER_PROJECT} files` });
+    const a = orm.em.create(Attachment, { project, filename: cleanName(file.originalname), contentType: type, size: file.size, data: file.buffer, uploadedBy: orm.em.getReference(User, userId) });
+    await orm.em.flush();
+    await orm.em.populate(a, ['uploadedBy']);
+    res.status(201).json(view(a));
+  });
+
+  router.get('/attachments/:attachmentId', async (req, res) => {
+    const { attachmentId } = parseInput(attachmentParamsSchema, req.params, 'params');
+    const a = await orm.em.findOne(Attachment, { id: attachmentId }, { populate: ['data'] });
+    if (!a) throw new NotFoundError('Attachment');
+    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'read').catch(() => {
+      throw new NotFoundError('Attachment');
+    });
+    res.set('Content-Type', a.contentType);
+    res.set('Content-Disposition', `${a.contentType === 'application/pdf' ? 'inline' : 'inline'}; filename="${encodeURIComponent(a.filename)}"`);
+    res.set('Content-Security-Policy', "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'");
+    res.set('Cache-Control', 'private, max-age=300');
+    res.send(a.data);
+  });
+
+  router.delete('/attachments/:attachmentId', async (req, res) => {
+    const { attachmentId } = parseInput(attachmentParamsSchema, req.params, 'params');
+    const a = await orm.em.findOne(Attachment, { id: attachmentId });
+    if (!a) throw new NotFoundError('Attachment');
+    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'project.write');
+    await orm.em.nativeDelete(Attachment, { id: a.id });
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,105 @@
+import { randomUUID } from 'node:crypto';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { can, type Role } from '@shared/api/roles';
+import type { CutSessionPlan, CuttingState } from '@shared/api/shop';
+import { diffReports } from '@shared/engine/diff';
+import { UnprocessableError } from '../../errors';
+import type { FrameEntity } from '../frames/frame.entity';
+import { frameReport, planFrame, supplierFor } from '../orders/frame-shop.service';
+import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
+import { User } from '../users/user.entity';
+import { CutSession, type CutSessionEntity } from './cut-session.entity';
+import { CutTick } from './cut-tick.entity';
+
+// Cutting at the saw: a plan frozen per frame when cutting starts, and ticks on its cuts. The latest session of a
+// frame is the live one; starting again (after a design change) begins a new session with no ticks.
+
+export async function latestSession(em: EntityManager, frameId: string): Promise<CutSessionEntity | null> {
+  return em.findOne(CutSession, { frame: frameId }, { orderBy: { startedAt: 'desc' }, populate: ['startedBy'], refresh: true });
+}
+
+/** Which planned cuts exist in a session, by key, with their mark. */
+function cutIndex(plan: CutSessionPlan): Map<string, string> {
+  const keys = new Map<string, string>();
+  for (const p of plan.plans) p.bars.forEach((b, bi) => b.cuts.forEach((c, ci) => keys.set(`${p.profileId}/${bi}/${ci}`, c.mark)));
+  return keys;
+}
+
+export async function cuttingState(em: EntityManager, frame: FrameEntity, role: Role): Promise<CuttingState> {
+  const session = await latestSession(em, frame.id);
+  const ticks = session ? await em.find(CutTick, { session: session.id }, { orderBy: { tickedAt: 'asc' }, populate: ['tickedBy'] }) : [];
+  let reuse: CuttingState['reuse'] = null;
+  if (session && session.frameVersion !== frame.version && ticks.length > 0) {
+    // The parts already cut (the first n members of each ticked mark) are the old parts; the current design's
+    // report is the new one: the engine's what-changed diff says what to keep, re-cut and cut new.
+    const count = new Map<string, number>();
+    for (const t of ticks) count.set(t.mark, (count.get(t.mark) ?? 0) + 1);
+    const cut = session.plan.members.filter((m) => {
+      const left = count.get(m.mark) ?? 0;
+      if (left <= 0) return false;
+      count.set(m.mark, left - 1);
+      return true;
+    });
+    try {
+      reuse = diffReports({ members: cut.map((m) => ({ ...m })) } as Parameters<typeof diffReports>[0], frameReport(frame));
+    } catch {
+      reuse = null;
+    }
+  }
+  return {
+    frameId: frame.id,
+    frameName: frame.name,
+    currentVersion: frame.version,
+    session: session
+      ? {
+          id: session.id,
+          frameVersion: session.frameVersion,
+          startedAt: session.startedAt.toISOString(),
+          startedBy: session.startedBy ? { id: session.startedBy.id, name: session.startedBy.name } : null,
+          plan: session.plan,
+        }
+      : null,
+    ticks: ticks.map((t) => ({ cutKey: t.cutKey, mark: t.mark, tickedBy: t.tickedBy ? { id: t.tickedBy.id, name: t.tickedBy.name } : null, tickedAt: t.tickedAt.toISOString() })),
+    reuse,
+    canTick: can(role, 'cuts.tick'),
+    canRestart: can(role, 'frame.write'),
+  };
+}
+
+/** Freezes the plan for the frame's current version (against the workshop's first supplier and the shelf). */
+export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, settings: { trim_mm: number; minOffcut_mm: number }): Promise<CutSessionEntity> {
+  const report = frameReport(frame);
+  const supplier = await supplierFor(em, frame.project.workshop.id, undefined);
+  const planned = await planFrame(em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
+  const plan: CutSessionPlan = {
+    frameName: frame.name,
+    cutList: planned.cutList,
+    plans: planned.plans,
+    members: report.members.map((m) => ({ id: m.id, mark: m.mark, profile: m.profile, cut_length_mm: m.cut_length_mm })),
+    settings,
+    units: report.units,
+  };
+  const s = em.create(CutSession, { frame, frameVersion: frame.version, plan, startedBy: em.getReference(User, userId) });
+  await em.flush();
+  return s;
+}
+
+/** A tick is idempotent: ticking a ticked cut changes nothing (two cutters may tap the same cut). */
+export async function tick(em: EntityManager, frameId: string, userId: string, cutKey: string): Promise<void> {
+  const session = await latestSession(em, frameId);
+  if (!session) throw new UnprocessableError('Cutting has not started on this frame', { cutKey: 'No cutting plan yet' });
+  const mark = cutIndex(session.plan).get(cutKey);
+  if (!mark) throw new UnprocessableError('No such cut in the cutting plan', { cutKey: 'Unknown cut' });
+  await em
+    .createQueryBuilder(CutTick)
+    .insert({ id: randomUUID(), session: session.id, cutKey, mark, tickedBy: userId, tickedAt: new Date() })
+    .onConflict(['session', 'cutKey'])
+    .ignore()
+    .execute();
+}
+
+export async function untick(em: EntityManager, frameId: string, cutKey: string): Promise<void> {
+  const session = await latestSession(em, frameId);
+  if (!session) return;
+  await em.nativeDelete(CutTick, { session: session.id, cutKey });
+}

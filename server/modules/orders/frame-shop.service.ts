@@ -1,0 +1,64 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { computeReport, type FrameReport } from '@shared/engine/report';
+import { parseFrameDocument } from '@shared/model/parse';
+import { planShop, type ShelfOffcut, type ShopPlanResult, type StockOffer } from '@shared/shop/shop-plan';
+import type { ShopMeta, ShopUnits } from '@shared/shop/types';
+import { UnprocessableError } from '../../errors';
+import type { FrameEntity } from '../frames/frame.entity';
+import { StockOffcut } from '../stock/stock-offcut.entity';
+import { Supplier, type SupplierEntity } from '../suppliers/supplier.entity';
+import { Workshop } from '../workshops/workshop.entity';
+
+// Everything the shop outputs of one frame need: its report, the plan against a supplier's bars and the shelf,
+// and the facts printed on every page.
+
+export function frameReport(frame: FrameEntity): FrameReport {
+  return computeReport(parseFrameDocument(frame.document));
+}
+
+export function today(): string {
+  return new Date().toISOString().slice(0, 10);
+}
+
+export async function shopMeta(em: EntityManager, frame: FrameEntity, report: FrameReport, opts: { paper?: 'A4' | 'LETTER'; units?: ShopUnits } = {}): Promise<ShopMeta> {
+  const workshop = await em.findOneOrFail(Workshop, { id: frame.project.workshop.id });
+  return {
+    project: frame.project.name,
+    frame: frame.name,
+    revision: frame.version,
+    date: today(),
+    workshop: workshop.name,
+    units: opts.units ?? report.units,
+    paper: opts.paper ?? 'A4',
+  };
+}
+
+export function offersOf(supplier: SupplierEntity | null): StockOffer[] {
+  return (supplier?.stock ?? []).map((s) => ({ profileId: s.profile, length_mm: s.length_mm, price: s.price }));
+}
+
+export async function shelfOf(em: EntityManager, workshopId: string): Promise<ShelfOffcut[]> {
+  const rows = await em.find(StockOffcut, { workshop: workshopId });
+  return rows.map((r) => ({ profileId: r.profile, length_mm: Number(r.lengthMm), qty: r.qty }));
+}
+
+/** The workshop's supplier by id (404 unless it is theirs), or its first supplier, or none. */
+export async function supplierFor(em: EntityManager, workshopId: string, supplierId: string | undefined): Promise<SupplierEntity | null> {
+  if (supplierId) {
+    const s = await em.findOne(Supplier, { id: supplierId, workshop: workshopId, deletedAt: null });
+    if (!s) throw new UnprocessableError('That supplier is not one of this workshop’s', { supplierId: 'Unknown supplier' });
+    return s;
+  }
+  return em.findOne(Supplier, { workshop: workshopId, deletedAt: null }, { orderBy: { name: 'asc' } });
+}
+
+export async function planFrame(
+  em: EntityManager,
+  frame: FrameEntity,
+  report: FrameReport,
+  opts: { supplier: SupplierEntity | null; useShelf: boolean; trim_mm: number; minOffcut_mm: number; timeLimitMs: number },
+): Promise<ShopPlanResult> {
+  if (report.cut_list.length === 0) throw new UnprocessableError('This frame has no members to cut yet');
+  const shelf = opts.useShelf ? await shelfOf(em, frame.project.workshop.id) : [];
+  return planShop(report, offersOf(opts.supplier), shelf, { trim_mm: opts.trim_mm, minOffcut_mm: opts.minOffcut_mm }, opts.timeLimitMs);
+}

@@ -1,0 +1,87 @@
+import { Router, type Response } from 'express';
+import { createOrderSchema, orderParamsSchema, orderStatusPatchSchema } from '@shared/api/shop';
+import { workshopParamsSchema } from '@shared/api/workshops';
+import type { Config } from '../../config';
+import type { Orm } from '../../db';
+import { currentUserId } from '../../http/current-user';
+import { createMailer } from '../../mail/mailer';
+import { parseInput } from '../../validate';
+import { authorizeWorkshop } from '../access/access.service';
+import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv, orderPdf, sendOrder, toOrderDetail } from './orders.service';
+
+/** Sends a generated file as a download with a safe file name. */
+export function sendFile(res: Response, body: Buffer | string, type: string, filename: string): void {
+  const safe = filename.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 120);
+  res.set('Content-Type', type);
+  res.set('Content-Disposition', `attachment; filename="${safe}"`);
+  res.set('Cache-Control', 'private, no-store');
+  res.send(body);
+}
+
+export function ordersRouter(orm: Orm, config: Config): Router {
+  const router = Router();
+
+  const orderWithRole = async (userId: string, orderId: string, action: 'read' | 'project.write') => {
+    const o = await findOrder(orm.em, orderId);
+    await authorizeWorkshop(orm.em, userId, o.workshop.id, action);
+    return o;
+  };
+
+  router.get('/workshops/:workshopId/orders', async (req, res) => {
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'read');
+    res.json(await listOrders(orm.em, workshopId));
+  });
+
+  router.post('/workshops/:workshopId/orders', async (req, res) => {
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    const userId = currentUserId(req);
+    await authorizeWorkshop(orm.em, userId, workshopId, 'project.write');
+    res.status(201).json(await createOrder(orm.em, workshopId, userId, parseInput(createOrderSchema, req.body)));
+  });
+
+  router.get('/orders/:orderId', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    res.json(toOrderDetail(await orderWithRole(currentUserId(req), orderId, 'read')));
+  });
+
+  router.get('/orders/:orderId/order.pdf', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    const o = await orderWithRole(currentUserId(req), orderId, 'read');
+    sendFile(res, await orderPdf(o), 'application/pdf', `order-${o.reference}.pdf`);
+  });
+
+  router.get('/orders/:orderId/order.csv', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    const o = await orderWithRole(currentUserId(req), orderId, 'read');
+    sendFile(res, orderCsv(o), 'text/csv; charset=utf-8', `order-${o.reference}.csv`);
+  });
+
+  router.post('/orders/:orderId/send', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    const userId = currentUserId(req);
+    await orderWithRole(userId, orderId, 'project.write');
+    const mailer = createMailer(config.mail);
+    try {
+      res.json(await sendOrder(orm.em, orderId, userId, mailer));
+    } finally {
+      mailer.close();
+    }
+  });
+
+  router.patch('/orders/:orderId', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    await orderWithRole(currentUserId(req), orderId, 'project.write');
+    parseInput(orderStatusPatchSchema, req.body);
+    res.json(await markReceived(orm.em, orderId));
+  });
+
+  router.delete('/orders/:orderId', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    await orderWithRole(currentUserId(req), orderId, 'project.write');
+    await deleteDraft(orm.em, orderId);
+    res.status(204).end();
+  });
+
+  return router;
+}
