@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { resolveProfile, sectionOf } from '@shared/catalog/profiles';
 import { computeReport } from '@shared/engine/report';
 import type { FrameReport } from '@shared/engine/report-types';
+import { demoFrameDocument } from '@shared/model/demo-frame';
+import { emptyFrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
 import { boxFrame, member, module } from './frames';
 
@@ -127,5 +129,28 @@ describe('other load cases against the tables', () => {
     expect(r.cautions.join(' ')).toMatch(/vehicle regulations/);
     expect(r.cautions.join(' ')).toMatch(/vehicle maker allows/);
     expect(r.loads.shock_factor_note).toMatch(/common practice/);
+  });
+
+  it('finds what each module bears on: slides beside a drawer, bearers under a tank (demo pod)', () => {
+    const r = computeReport(demoFrameDocument());
+    const on = (id: string) => r.modules.find((m) => m.id === id)?.bears_on.map((b) => [b.member_id, b.face]);
+    // The slide rails stand 12.7 mm off the pantry's sides (side-mount slides, common practice); they carry it
+    // on the faces towards it.
+    expect(on('pantry')).toEqual([
+      ['bay-pantry-slide-l', 'right'],
+      ['bay-pantry-slide-r', 'left'],
+    ]);
+    expect(on('tank')).toEqual([
+      ['bay-tank-bearer-l', 'top'],
+      ['bay-tank-bearer-r', 'top'],
+    ]);
+    // A 30 L tank counts full: 3 kg + 30 L × 1 kg/L = 33 kg.
+    expect(r.modules.find((m) => m.id === 'tank')?.mass_kg).toBe(33);
+  });
+
+  it('reports an empty frame without failing', () => {
+    const r = computeReport(emptyFrameDocument());
+    expect(r.mass).toMatchObject({ total_kg: 0, cog_mm: null });
+    expect(r.loads.max_utilisation).toBeNull();
   });
 });
