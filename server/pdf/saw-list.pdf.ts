@@ -40,16 +40,27 @@ function diagram(bar: SawBar, scale_mm: number, width: number): Content {
 }
 
 function barBlock(p: SawProfile, bar: SawBar, width: number): Content {
-  const head: TableCell[] = ['', '#', 'Mark', 'Length', 'Piece', 'Machining'].map((t) => ({ text: t, style: 'th' }));
-  const body: TableCell[][] = [head];
+  const source = bar.fromShelf ? 'offcut from the shelf' : 'stock bar';
+  const span = (cell: TableCell): TableCell[] => [{ ...(cell as object), colSpan: 6 } as TableCell, '', '', '', '', ''];
+  const body: TableCell[][] = [
+    span({
+      columns: [
+        { text: [{ text: `Bar ${bar.n} of ${p.bars.length}`, font: 'BarlowBold', fontSize: 12 }, { text: `   ${bar.stockText} ${source}`, fontSize: 10 }], width: '*' },
+        { text: `${bar.cuts.length} cut${bar.cuts.length === 1 ? '' : 's'} · full width = ${p.scaleText}`, alignment: 'right', color: MUTED, fontSize: 8.5, width: 160, margin: [0, 3, 0, 0] },
+      ],
+      margin: [0, 8, 0, 0],
+    }),
+    span(diagram(bar, p.scale_mm, width) as TableCell),
+    ['', '#', 'Mark', 'Length', 'Piece', 'Machining'].map((t) => ({ text: t, style: 'th' })),
+  ];
   for (const c of bar.cuts) {
     body.push([
       checkbox(12),
-      { text: String(c.seq), color: MUTED },
-      { text: c.mark, font: 'BarlowBold', fontSize: 13 },
-      { text: c.lengthText, font: 'BarlowBold', fontSize: 13 },
-      { text: `${c.piece} of ${c.of}`, color: MUTED },
-      { text: c.ops.join(', ') || '—', fontSize: 9 },
+      { text: String(c.seq), color: MUTED, margin: [0, 2, 0, 0] },
+      { text: c.mark, font: 'BarlowBold', fontSize: 12.5 },
+      { text: c.lengthText, font: 'BarlowBold', fontSize: 12.5 },
+      { text: `${c.piece} of ${c.of}`, color: MUTED, margin: [0, 2, 0, 0] },
+      { text: c.ops.join(', ') || '—', fontSize: 9, margin: [0, 2, 0, 0] },
     ]);
   }
   body.push([
@@ -60,20 +71,18 @@ function barBlock(p: SawProfile, bar: SawBar, width: number): Content {
     { text: bar.leftoverKept ? 'keep: mark it and shelve it' : 'scrap', colSpan: 2, color: MUTED, fontSize: 9 },
     '',
   ]);
-  const source = bar.fromShelf ? 'offcut from the shelf' : 'stock bar';
+  const last = body.length;
   return {
-    unbreakable: true,
-    stack: [
-      {
-        columns: [
-          { text: [{ text: `Bar ${bar.n} of ${p.bars.length}`, font: 'BarlowBold', fontSize: 12 }, { text: `   ${bar.stockText} ${source}`, fontSize: 10 }], width: '*' },
-          { text: `${bar.cuts.length} cut${bar.cuts.length === 1 ? '' : 's'} · full width = ${p.scaleText}`, alignment: 'right', color: MUTED, fontSize: 8.5, width: 160 },
-        ],
-        margin: [0, 8, 0, 3],
-      },
-      diagram(bar, p.scale_mm, width),
-      { table: { headerRows: 1, widths: [14, 14, 44, 90, 44, '*'], body }, layout: rowsLayout },
-    ],
+    table: { headerRows: 3, keepWithHeaderRows: 2, dontBreakRows: true, widths: [14, 14, 44, 90, 44, '*'], body },
+    layout: {
+      hLineWidth: (i: number) => (i === 3 ? 1 : i > 3 && i < last ? 0.5 : 0),
+      vLineWidth: () => 0,
+      hLineColor: (i: number) => (i === 3 ? INK : RULE),
+      paddingTop: (i: number) => (i < 2 ? 0 : 2.5),
+      paddingBottom: (i: number) => (i < 2 ? 0 : 2.5),
+      paddingLeft: (i: number) => (i === 0 ? 0 : 5),
+      paddingRight: () => 5,
+    },
   };
 }
 
