@@ -91,16 +91,22 @@ function lowerBound(list: readonly SnapTarget[], x: number): number {
   return lo;
 }
 
-/** The best target within `tol` of `value`: nearest, then by kind. */
-export function nearestTarget(list: readonly SnapTarget[], value: number, tol: number): SnapTarget | null {
+/**
+ * The best target within `tol` of `value`. With `at` (the point's coordinate on the other screen axis), targets
+ * that reach `at` come first: a rail drawn at mid-height between two uprights attaches to the uprights, not to the
+ * ends of rails that happen to line up with them at the top. Then the nearest, then by kind.
+ */
+export function nearestTarget(list: readonly SnapTarget[], value: number, tol: number, at?: number): SnapTarget | null {
   let best: SnapTarget | null = null;
-  let bestD = Infinity;
+  let bestKey: [number, number, number] = [Infinity, Infinity, Infinity];
   for (let i = lowerBound(list, value - tol); i < list.length && list[i].value <= value + tol; i++) {
     const t = list[i];
-    const d = Math.abs(t.value - value);
-    if (d < bestD - 1e-9 || (Math.abs(d - bestD) <= 1e-9 && best && PRIORITY[t.kind] < PRIORITY[best.kind])) {
+    const reaches = at === undefined || t.kind === 'grid' || (at >= Math.min(t.from, t.to) - tol && at <= Math.max(t.from, t.to) + tol) ? 0 : 1;
+    const d = Math.round(Math.abs(t.value - value) * 1e6) / 1e6;
+    const key: [number, number, number] = [reaches, d, PRIORITY[t.kind]];
+    if (key[0] < bestKey[0] || (key[0] === bestKey[0] && (key[1] < bestKey[1] || (key[1] === bestKey[1] && key[2] < bestKey[2])))) {
       best = t;
-      bestD = d;
+      bestKey = key;
     }
   }
   return best;
@@ -109,11 +115,11 @@ export function nearestTarget(list: readonly SnapTarget[], value: number, tol: n
 export type Snapped = { value: number; target: SnapTarget | null };
 
 /**
- * Snap one coordinate: to the nearest target within `tol`, else to the grid when `gridStep` is given, else as
- * it is. The grid never attaches a reference.
+ * Snap one coordinate: to the best target within `tol` (see nearestTarget), else to the grid when `gridStep` is
+ * given, else as it is. The grid never attaches a reference.
  */
-export function snapValue(list: readonly SnapTarget[], value: number, tol: number, gridStep: number | null): Snapped {
-  const t = nearestTarget(list, value, tol);
+export function snapValue(list: readonly SnapTarget[], value: number, tol: number, gridStep: number | null, at?: number): Snapped {
+  const t = nearestTarget(list, value, tol, at);
   if (t) return { value: t.value, target: t };
   if (gridStep) {
     const g = snapToStep(value, gridStep);

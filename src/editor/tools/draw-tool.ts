@@ -32,12 +32,13 @@ export function createDrawTool(): Tool {
   let from: { h: Snapped; v: Snapped } | null = null;
   let draft: { along: 'h' | 'v'; a: Snapped; b: Snapped; across: number } | null = null;
 
-  const snapPoint = (p: PointerInput, ctx: ToolContext) => {
+  /** Snap a point; `across` pins the other coordinate a target must reach (the line being drawn along). */
+  const snapPoint = (p: PointerInput, ctx: ToolContext, across?: { h?: number; v?: number }) => {
     const t = ctx.targets(new Set());
     const tol = p.alt ? 0 : ctx.snapTolMm;
     const grid = p.alt ? null : ctx.gridStep;
-    const h = snapValue(t.h, p.h, tol, grid);
-    const v = snapValue(t.v, p.v, tol, grid);
+    const h = snapValue(t.h, p.h, tol, grid, across?.v ?? p.v);
+    const v = snapValue(t.v, p.v, tol, grid, across?.h ?? p.h);
     return { h: { value: h.value, ref: h.target?.ref ?? null, target: h.target }, v: { value: v.value, ref: v.target?.ref ?? null, target: v.target } };
   };
 
@@ -71,7 +72,8 @@ export function createDrawTool(): Tool {
       if (phase === 'pointing' && !dragged(start, p)) return;
       phase = 'dragging';
       const along: 'h' | 'v' = Math.abs(p.h - start.h) >= Math.abs(p.v - start.v) ? 'h' : 'v';
-      const s = snapPoint(p, ctx);
+      // The far end is on the line through the start: targets must reach that line.
+      const s = snapPoint(p, ctx, along === 'h' ? { v: from.v.value } : { h: from.h.value });
       const a = along === 'h' ? from.h : from.v;
       const b = along === 'h' ? s.h : s.v;
       const across = along === 'h' ? from.v.value : from.h.value;

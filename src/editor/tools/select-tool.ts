@@ -123,7 +123,8 @@ export function createSelectTool(): Tool {
         case 'stretch': {
           const targets = ctx.targets(new Set([g.member.id]));
           const raw = g.along === 'h' ? p.h : p.v;
-          const s = snapValue(g.along === 'h' ? targets.h : targets.v, raw, tol, grid);
+          const mid = g.along === 'h' ? (g.item.y0 + g.item.y1) / 2 : (g.item.x0 + g.item.x1) / 2;
+          const s = snapValue(g.along === 'h' ? targets.h : targets.v, raw, tol, grid, mid);
           result = { dh: 0, dv: 0, value: s.value, target: s.target };
           const r = { ...g.item };
           const lo = g.along === 'h' ? 'x0' : 'y0';

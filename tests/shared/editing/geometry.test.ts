@@ -107,3 +107,17 @@ describe('snapping', () => {
     expect(t.h.some((x) => x.ref && 'member' in x.ref && x.ref.member === 'u0')).toBe(false);
   });
 });
+
+describe('snapping prefers what the point actually touches', () => {
+  // An upright at x 0–40 running 0–800 high, and a rail across its top whose end lines up with the upright's face.
+  const scene = sceneOf([sceneMember('u', 'z', box(0, 0, 0, 40, 40, 800)), sceneMember('top', 'x', box(40, 0, 760, 500, 40, 800))]);
+  const targets = collectTargets(scene, VIEWS.front);
+  it('at mid-height a point by x = 40 attaches to the upright’s face, not the end of the rail above', () => {
+    const s = snapValue(targets.h, 42, 5, null, 300);
+    expect(s.target?.ref).toEqual({ member: 'u', face: 'max', offset_mm: 0 });
+  });
+  it('at the rail’s height the rail’s end (a member end) is preferred', () => {
+    const s = snapValue(targets.h, 42, 5, null, 780);
+    expect(s.target?.ref).toEqual({ member: 'top', face: 'min', offset_mm: 0 });
+  });
+});

@@ -1,0 +1,92 @@
+import type { Page } from 'playwright-core';
+import { projectBox, VIEWS, type ViewId } from '@shared/editing/views';
+import type { FrameReport } from '@shared/engine/report';
+
+// Browser-test helpers for the frame editor: a scratch project holding the test's own copies of frames (so the
+// tests never change the seeded demo frame others read), and the front view's mapping from millimetres to the
+// screen, read from the camera the canvas publishes.
+
+/** Runs a script in the page as text (the TypeScript loader's helpers for named functions do not exist there). */
+async function inPage<T>(page: Page, body: string): Promise<T> {
+  return (await page.evaluate(`(async () => {
+    const call = async (method, url, body) => {
+      const csrf = method === 'GET' ? null : (await (await fetch('/api/auth/csrf', { credentials: 'same-origin' })).json()).token;
+      const r = await fetch(url, {
+        method,
+        credentials: 'same-origin',
+        headers: csrf ? { 'Content-Type': 'application/json', 'X-CSRF-Token': csrf } : {},
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
+      if (!r.ok) throw new Error(method + ' ' + url + ': ' + r.status + ' ' + (await r.text()));
+      return r.status === 204 ? null : r.json();
+    };
+    ${body}
+  })()`)) as T;
+}
+
+export type ScratchProject = { workshopId: string; projectId: string };
+
+/** A project of the signed-in owner's workshop for this test file's frames. */
+export function createScratchProject(page: Page, name: string): Promise<ScratchProject> {
+  return inPage(
+    page,
+    `const [w] = await call('GET', '/api/workshops');
+     const p = await call('POST', '/api/workshops/' + w.id + '/projects', { name: ${JSON.stringify(name)} });
+     return { workshopId: w.id, projectId: p.id };`,
+  );
+}
+
+export function deleteScratchProject(page: Page, p: ScratchProject): Promise<void> {
+  return inPage(page, `await call('DELETE', '/api/projects/${p.projectId}'); return null;`);
+}
+
+/** Creates a frame holding `document` in the scratch project and opens it in the editor; returns its address. */
+export async function openFrameCopy(page: Page, p: ScratchProject, name: string, document: unknown): Promise<string> {
+  const id = await inPage<string>(
+    page,
+    `const f = await call('POST', '/api/projects/${p.projectId}/frames', { name: ${JSON.stringify(name)}, document: ${JSON.stringify(document)} });
+     return f.id;`,
+  );
+  const path = `/w/${p.workshopId}/projects/${p.projectId}/frames/${id}`;
+  await page.goto(path);
+  await page.getByTestId('frame-editor').waitFor();
+  // Let the canvas measure itself and fit the frame.
+  await page.waitForTimeout(500);
+  return path;
+}
+
+/** Screen point (page pixels) of a point given in a view's millimetres. */
+export async function toScreen(page: Page, view: ViewId, h: number, v: number): Promise<{ x: number; y: number }> {
+  const canvas = page.locator(`[data-view="${view}"]`).first();
+  const box = await canvas.boundingBox();
+  if (!box) throw new Error(`the ${view} view is not on screen`);
+  const [scale, ox, oy] = ((await canvas.getAttribute('data-camera')) ?? '').split(' ').map(Number);
+  return { x: box.x + ox + h * scale, y: box.y + oy - v * scale };
+}
+
+/** A member's or module's box as the report gives it, seen in a view (mm). */
+export function itemInView(report: FrameReport, view: ViewId, id: string) {
+  const m = report.members.find((x) => x.id === id) ?? report.modules.find((x) => x.id === id);
+  if (!m) throw new Error(`no member or module "${id}" in the report`);
+  return projectBox(VIEWS[view], { min: [m.min_mm.x, m.min_mm.y, m.min_mm.z], max: [m.max_mm.x, m.max_mm.y, m.max_mm.z] });
+}
+
+/** The cut list's rows as [mark, profile, cut length, qty]. */
+export async function cutListRows(page: Page): Promise<string[][]> {
+  await page.getByRole('tab', { name: 'Cut list' }).click();
+  const rows = page.getByRole('table', { name: 'Cut list' }).locator('tbody tr');
+  await rows.first().waitFor();
+  return (await rows.allInnerTexts()).map((t) => t.split('\t').map((c) => c.trim()));
+}
+
+/** Picks a member from the part panel's list (the keyboard and screen-reader way) and reads a field of it. */
+export async function pickMember(page: Page, id: string): Promise<void> {
+  await page.getByRole('tab', { name: 'Part' }).click();
+  const back = page.getByRole('button', { name: '← All members' });
+  if (await back.count()) await back.click();
+  await page.getByRole('list', { name: 'Members' }).getByRole('button', { name: new RegExp(`\\b${id}\\b`) }).click();
+}
+
+export async function fieldValue(page: Page, testid: string): Promise<string> {
+  return page.getByTestId(testid).locator('input').inputValue();
+}
