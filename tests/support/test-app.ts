@@ -52,10 +52,13 @@ export async function createTestContext(overrides: Record<string, string> = {}):
   };
 }
 
-/** Empties every table (schema stays), so a test file starts from nothing. */
+/** Empties every table but the migrations log (schema stays), so a test file starts from nothing. */
 export async function truncateAll(orm: Orm): Promise<void> {
-  await orm.em
-    .fork()
-    .getConnection()
-    .execute('truncate table frame_revisions, frames, projects, memberships, workshops, users, "session" restart identity cascade');
+  const conn = orm.em.fork().getConnection();
+  const rows = await conn.execute<{ tablename: string }[]>(
+    "select tablename from pg_tables where schemaname = current_schema() and tablename <> 'mikro_orm_migrations'",
+  );
+  if (rows.length === 0) return;
+  const list = rows.map((r) => `"${r.tablename.replace(/"/g, '""')}"`).join(', ');
+  await conn.execute(`truncate table ${list} restart identity cascade`);
 }
