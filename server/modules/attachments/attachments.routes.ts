@@ -70,11 +70,12 @@ export function attachmentsRouter(orm: Orm): Router {
     await authorizeProject(orm.em, currentUserId(req), a.project.id, 'read').catch(() => {
       throw new NotFoundError('Attachment');
     });
-    res.set('Content-Type', a.contentType);
+    res.setHeader('Content-Type', a.contentType);
     res.set('Content-Disposition', `${a.contentType === 'application/pdf' ? 'inline' : 'inline'}; filename="${encodeURIComponent(a.filename)}"`);
     res.set('Content-Security-Policy', "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'");
     res.set('Cache-Control', 'private, max-age=300');
-    res.send(a.data);
+    const bytes = await a.data.load();
+    res.send(Buffer.from(bytes ?? Buffer.alloc(0)));
   });
 
   router.delete('/attachments/:attachmentId', async (req, res) => {

@@ -12,7 +12,7 @@ import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv
 /** Sends a generated file as a download with a safe file name. */
 export function sendFile(res: Response, body: Buffer | string, type: string, filename: string): void {
   const safe = filename.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 120);
-  res.set('Content-Type', type);
+  res.setHeader('Content-Type', type);
   res.set('Content-Disposition', `attachment; filename="${safe}"`);
   res.set('Cache-Control', 'private, no-store');
   res.send(body);
