@@ -4,6 +4,7 @@ import { PROFILE_DISCLAIMER } from '../catalog/profiles';
 export const CAUTIONS: readonly string[] = [
   'Screening calculation only, not an engineering approval. Deflections and stresses come from standard beam formulas on generic section properties and simplified load paths.',
   'In a moving vehicle, braking, cornering and crash loads act in every direction and crash loads are far higher than the shock factor used here: they are governed by vehicle regulations. Have the design and its fixings assessed by a qualified person.',
+  'Joints, brackets and fixings are often weaker than the members they join and are not checked here.',
   "Fix the frame to the vehicle's structure only at points the vehicle maker allows, and latch drawers and doors so they stay shut on the road.",
   'Gas, electrical and water work follow their own codes and need licensed trades where the law requires them.',
   PROFILE_DISCLAIMER,

@@ -1,3 +1,5 @@
+import type { FrameDocument } from '../model/frame-document';
+
 /** A, B, … Z, AA, AB, … (bijective base 26). */
 export function markName(k: number): string {
   let s = '';
@@ -55,4 +57,14 @@ export function assignMarks(groups: readonly MarkGroup[], hints: ReadonlyMap<str
     used.add(fresh);
     return fresh;
   });
+}
+
+/**
+ * The document with every member's current part mark pinned (`member.mark`), e.g. once parts are cut and
+ * labelled, so that any later report (the server's printed lists included, which have no previous report to carry
+ * marks from) gives the same parts the same marks.
+ */
+export function pinMarks(doc: FrameDocument, report: { members: ReadonlyArray<{ id: string; mark: string }> }): FrameDocument {
+  const marks = new Map(report.members.map((m) => [m.id, m.mark]));
+  return { ...doc, members: doc.members.map((m) => (marks.has(m.id) ? { ...m, mark: marks.get(m.id) } : m)) };
 }

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { assignMarks, markName } from '@shared/engine/part-marks';
+import { assignMarks, markName, pinMarks } from '@shared/engine/part-marks';
+import { computeReport } from '@shared/engine/report';
+import { demoFrameDocument } from '@shared/model/demo-frame';
+import { resizeModule } from './relay-helpers';
 
 describe('part marks', () => {
   it('run A … Z, AA, AB … (like spreadsheet columns)', () => {
@@ -39,5 +42,22 @@ describe('part marks', () => {
       ['c', { mark: 'Q', pinned: true }],
     ]);
     expect(assignMarks([{ members: ['a', 'b', 'c'], cut_length_mm: 1 }], hints)).toEqual(['Q']);
+  });
+
+  it('pinned into the document, marks carried through a re-lay hold without the previous report', () => {
+    const doc = demoFrameDocument();
+    const r0 = computeReport(doc);
+    // Make the tank as wide as the cooler: its bay rails become 480 mm like the cooler's and the two groups merge.
+    const relaid = resizeModule(doc, 'tank', { w_mm: 460 });
+    const carried = computeReport(relaid, { previous: r0 });
+    const mark = (r: typeof r0, id: string) => r.members.find((m) => m.id === id)?.mark;
+    // Carried: the merged group keeps the cooler rails' mark (same length as before), the cooktop rails keep theirs.
+    expect(mark(carried, 'bay-tank-top-f')).toBe(mark(r0, 'bay-cooler-top-f'));
+    expect(mark(carried, 'bay-cooktop-top-f')).toBe(mark(r0, 'bay-cooktop-top-f'));
+    // Fresh marks (no history) close the gap the merge left, so the cooktop rails would change letter …
+    expect(mark(computeReport(relaid), 'bay-cooktop-top-f')).not.toBe(mark(r0, 'bay-cooktop-top-f'));
+    // … unless the carried marks are pinned in the document.
+    const pinned = computeReport(pinMarks(relaid, carried));
+    expect(pinned.members.map((m) => m.mark)).toEqual(carried.members.map((m) => m.mark));
   });
 });
