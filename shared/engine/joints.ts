@@ -160,12 +160,11 @@ export function findJoints(
   };
 
   const add = (j: Omit<Joint, 'id' | 'at'>) => {
-    const a = members[j.butting].member.id;
-    const b = members[j.other].member.id;
-    taken.add(pairKey(a, b));
+    const id = pairKey(members[j.butting].member.id, members[j.other].member.id);
+    taken.add(id);
     endJoint[j.butting][e(j.buttingEnd)] = joints.length;
     if (j.otherEnd && endJoint[j.other][e(j.otherEnd)] === null) endJoint[j.other][e(j.otherEnd)] = joints.length;
-    joints.push({ ...j, id: pairKey(a, b), at: { x: 0, y: 0, z: 0 } });
+    joints.push({ ...j, id, at: { x: 0, y: 0, z: 0 } });
   };
 
   members.forEach((m, i) => {
