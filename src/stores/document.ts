@@ -130,7 +130,8 @@ export const useDocumentStore = defineStore('document', () => {
     report.value = result.report;
     scene.value = result.scene;
     refusal.value = null;
-    if (opts.summarise && before) summary.value = { label: change.label, changes: diffReports(before, result.report) };
+    // A summary describes the last re-lay only; any other change makes it stale.
+    summary.value = opts.summarise && before ? { label: change.label, changes: diffReports(before, result.report) } : null;
     if (opts.select) selection.value = opts.select;
     keepSelectionValid(result.scene);
     revision.value++;

@@ -84,7 +84,9 @@ export async function pickMember(page: Page, id: string): Promise<void> {
   await page.getByRole('tab', { name: 'Part' }).click();
   const back = page.getByRole('button', { name: '← All members' });
   if (await back.count()) await back.click();
-  await page.getByRole('list', { name: 'Members' }).getByRole('button', { name: new RegExp(`\\b${id}\\b`) }).click();
+  // Each entry reads "<mark> <id> <cut length>"; match the id as a whole word between spaces.
+  const escaped = id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+  await page.getByRole('list', { name: 'Members' }).getByRole('button', { name: new RegExp(`^\\S*\\s${escaped}\\s`) }).click();
 }
 
 export async function fieldValue(page: Page, testid: string): Promise<string> {
