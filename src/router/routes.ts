@@ -16,6 +16,10 @@ export interface RouteNamedMap {
   members: RouteRecordInfo<'members', '/w/:workshopId/members', WorkshopParams, WorkshopParams>;
   project: RouteRecordInfo<'project', '/w/:workshopId/projects/:projectId', ProjectParams, ProjectParams>;
   frame: RouteRecordInfo<'frame', '/w/:workshopId/projects/:projectId/frames/:frameId', FrameParams, FrameParams>;
+  cutting: RouteRecordInfo<'cutting', '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', FrameParams, FrameParams>;
+  suppliers: RouteRecordInfo<'suppliers', '/w/:workshopId/suppliers', WorkshopParams, WorkshopParams>;
+  orders: RouteRecordInfo<'orders', '/w/:workshopId/orders', WorkshopParams, WorkshopParams>;
+  outbox: RouteRecordInfo<'outbox', '/w/:workshopId/outbox', WorkshopParams, WorkshopParams>;
   forbidden: RouteRecordInfo<'forbidden', '/forbidden', NoParams, NoParams>;
   'not-found': RouteRecordInfo<'not-found', '/:pathMatch(.*)*', { pathMatch: string | string[] }, { pathMatch: string[] }>;
 }
@@ -69,6 +73,11 @@ export const routes: RouteRecordRaw[] = [
     component: () => import('@/views/FrameView.vue'),
     meta: { requires: 'read', title: 'Frame' },
   },
+  // Shop outputs and ordering.
+  { path: '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', name: 'cutting', component: () => import('@/views/CuttingView.vue'), meta: { requires: 'read', title: 'Cutting' } },
+  { path: '/w/:workshopId/suppliers', name: 'suppliers', component: () => import('@/views/SuppliersView.vue'), meta: { requires: 'read', title: 'Suppliers and stock' } },
+  { path: '/w/:workshopId/orders', name: 'orders', component: () => import('@/views/OrdersView.vue'), meta: { requires: 'read', title: 'Orders' } },
+  { path: '/w/:workshopId/outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { requires: 'workshop.manage', title: 'Outbox' } },
   {
     path: '/forbidden',
     name: 'forbidden',
