@@ -12,6 +12,7 @@ import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
 import { useApi } from '@/api';
 import { useDocumentSaving } from './document-saving';
+import { useNoticesStore } from './notices';
 
 export type Selection = { members: readonly string[]; modules: readonly string[] };
 const NOTHING: Selection = { members: [], modules: [] };
@@ -33,6 +34,7 @@ export type ApplyOptions = {
  */
 export const useDocumentStore = defineStore('document', () => {
   const api = useApi();
+  const notices = useNoticesStore();
   const frameId = ref<string | null>(null);
   const doc = shallowRef<FrameDocument | null>(null);
   const report = shallowRef<FrameReport | null>(null);
@@ -70,6 +72,13 @@ export const useDocumentStore = defineStore('document', () => {
 
   /** Open a frame as loaded from the server. */
   function open(frame: Frame, canWrite: boolean): void {
+    // Going straight from one frame to another: what waits to be saved goes now, for the frame it belongs to.
+    if (frameId.value && frameId.value !== frame.id && doc.value && saving.dirty && !saving.conflict) {
+      const [id, base, pending] = [frameId.value, saving.baseVersion, doc.value];
+      void api.frames.saveDocument(id, { baseVersion: base, document: pending as unknown as Record<string, unknown> }).catch((e: unknown) =>
+        notices.notify(`Your last changes to the previous frame were not saved: ${e instanceof Error ? e.message : String(e)}`, 'error'),
+      );
+    }
     frameId.value = frame.id;
     history.clear();
     historyTick.value++;
