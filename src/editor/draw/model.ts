@@ -58,6 +58,19 @@ function outlineOf(profileId: string): Outline | null {
 
 export type ScreenRect = { x: number; y: number; w: number; h: number };
 
+/**
+ * Whether something nearer than items[i] covers the point (h, v) (mm). Items are sorted far to near, so only the
+ * ones after i can. Used to leave out the labels of things hidden behind others.
+ */
+function covered(items: readonly ViewItem[], i: number, h: number, v: number): boolean {
+  const near = items[i].near;
+  for (let j = i + 1; j < items.length; j++) {
+    const r = items[j];
+    if (r.near > near + 1e-6 && h > r.x0 && h < r.x1 && v > r.y0 && v < r.y1) return true;
+  }
+  return false;
+}
+
 export function screenRect(cam: Camera, r: { x0: number; x1: number; y0: number; y1: number }): ScreenRect {
   const x = toScreenX(cam, r.x0);
   const y = toScreenY(cam, r.y1);
@@ -120,8 +133,8 @@ function label(ctx: CanvasRenderingContext2D, text: string, cx: number, cy: numb
 
 export function drawModules(ctx: CanvasRenderingContext2D, o: ModelOptions): void {
   const visible = visibleRect(o.cam, o.vp.width, o.vp.height);
-  for (const item of o.items.modules) {
-    if (!rectsOverlap(item, visible)) continue;
+  o.items.modules.forEach((item, order) => {
+    if (!rectsOverlap(item, visible)) return;
     const m = o.scene.modules[item.index];
     const s = screenRect(o.cam, item);
     ctx.globalAlpha = o.faded.has(m.id) ? 0.35 : 1;
@@ -132,7 +145,11 @@ export function drawModules(ctx: CanvasRenderingContext2D, o: ModelOptions): voi
     ctx.setLineDash([7, 4]);
     ctx.strokeRect(s.x, s.y, s.w, s.h);
     ctx.setLineDash([]);
-    if (!o.compact && s.w > 60 && s.h > 34) {
+    // A module behind another shows its outline only: two names on top of each other read as neither.
+    const hidden = covered(o.items.modules, order, item.x0 + 2, item.y1 - 2);
+    if (hidden) {
+      // nothing more to draw
+    } else if (!o.compact && s.w > 60 && s.h > 34) {
       ctx.save();
       ctx.beginPath();
       ctx.rect(s.x, s.y, s.w, s.h);
@@ -152,18 +169,18 @@ export function drawModules(ctx: CanvasRenderingContext2D, o: ModelOptions): voi
       ctx.textBaseline = 'top';
       ctx.fillText(m.name.slice(0, Math.max(1, Math.floor(s.w / 6))), s.x + 3, s.y + 3);
     }
-  }
+  });
   ctx.globalAlpha = 1;
 }
 
 export function drawMembers(ctx: CanvasRenderingContext2D, o: ModelOptions): void {
   const visible = visibleRect(o.cam, o.vp.width, o.vp.height);
   const scale = o.cam.scale;
-  const labels: [string, number, number][] = [];
+  const labels: [string, number, number, number][] = [];
   ctx.lineWidth = 1;
   ctx.strokeStyle = PALETTE.memberEdge;
-  for (const item of o.items.members) {
-    if (!rectsOverlap(item, visible)) continue;
+  o.items.members.forEach((item, order) => {
+    if (!rectsOverlap(item, visible)) return;
     const m = o.scene.members[item.index];
     const s = screenRect(o.cam, item);
     ctx.globalAlpha = o.faded.has(m.id) ? 0.3 : 1;
@@ -205,11 +222,14 @@ export function drawMembers(ctx: CanvasRenderingContext2D, o: ModelOptions): voi
       ctx.stroke();
       ctx.strokeStyle = PALETTE.memberEdge;
     }
-    if (!o.compact && m.mark && Math.max(s.w, s.h) >= 30) labels.push([m.mark, s.x + s.w / 2, s.y + s.h / 2]);
-  }
+    if (!o.compact && m.mark && Math.max(s.w, s.h) >= 30) labels.push([m.mark, s.x + s.w / 2, s.y + s.h / 2, order]);
+  });
   ctx.globalAlpha = 1;
-  // Part marks last, so no member covers another's mark.
-  for (const [text, x, y] of labels) label(ctx, text, x, y, 11);
+  // Part marks last, so no member covers another's mark; a member hidden behind a nearer one keeps its mark to itself.
+  for (const [text, x, y, order] of labels) {
+    const item = o.items.members[order];
+    if (!covered(o.items.members, order, (item.x0 + item.x1) / 2, (item.y0 + item.y1) / 2)) label(ctx, text, x, y, 11);
+  }
 }
 
 /** The centre of gravity: a circle in quarters, the usual drawing symbol. */
