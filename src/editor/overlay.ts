@@ -18,6 +18,8 @@ export type OverlayState = {
   /** A short note beside the pointer ("snapped to u0 face", "swap with Cooler"). */
   note: string | null;
   pointer: { h: number; v: number } | null;
+  /** What a click would pick. */
+  hover: Rect2 | null;
 };
 
-export const emptyOverlay = (): OverlayState => ({ ghost: [], draft: null, box: null, cues: [], swapTarget: null, note: null, pointer: null });
+export const emptyOverlay = (): OverlayState => ({ ghost: [], draft: null, box: null, cues: [], swapTarget: null, note: null, pointer: null, hover: null });

@@ -102,6 +102,8 @@ export function drawOverlay(ctx: CanvasRenderingContext2D, o: OverlayOptions): v
     drawCog(ctx, toScreenX(cam, h), toScreenY(cam, v), o.compact ? 5 : 8);
   }
 
+  if (overlay.hover && !o.compact) outlineRect(ctx, cam, overlay.hover, PALETTE.selection, 1, [3, 2]);
+
   for (const item of o.selectedModules) {
     ctx.fillStyle = PALETTE.selectionFill;
     const s = screenRect(cam, item);

@@ -92,7 +92,11 @@ export function createSelectTool(): Tool {
     move(p, ctx) {
       const o = ctx.overlay;
       o.pointer = { h: p.h, v: p.v };
-      if (!g || phase === 'idle') return;
+      if (!g || phase === 'idle') {
+        o.hover = hitItem(ctx.items.members, p.h, p.v, padMm(ctx, HIT_PAD_PX)) ?? hitItem(ctx.items.modules, p.h, p.v, 0);
+        return;
+      }
+      o.hover = null;
       if (phase === 'pointing') {
         if (!dragged(g.start, p)) return;
         phase = 'dragging';

@@ -63,4 +63,5 @@ export function clearOverlay(o: OverlayState): void {
   o.cues = [];
   o.swapTarget = null;
   o.note = null;
+  o.hover = null;
 }
