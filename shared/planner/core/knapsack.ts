@@ -49,7 +49,138 @@ export function solveKnapsack(
   }
   if (idx.length === 0) return { value: 0, counts: new Int32Array(n), upper: 0, exact: true, others: [] };
   if ((cap + 1) * pieces <= DP_BUDGET) return dp(w, v, u, cap, idx, pieces, n);
-  return branchAndBound(w, v, u, cap, idx, n, nodeLimit);
+  return pareto(w, v, u, cap, idx, n) ?? branchAndBound(w, v, u, cap, idx, n, nodeLimit);
+}
+
+const PARETO_STATES = 3_000_000;
+
+/**
+ * Dynamic programme over item pieces that keeps only non-dominated (weight, value) states (Nemhauser & Ullmann,
+ * "Discrete dynamic programming and capital allocation", Management Science 15 (1969) 494–505), pieces taken in
+ * decreasing value/weight order so a state whose best completion cannot beat the incumbent is dropped. Its work
+ * follows the number of useful partial patterns, not the capacity. Returns null past a work limit.
+ */
+function pareto(
+  w: ArrayLike<number>,
+  v: ArrayLike<number>,
+  u: ArrayLike<number>,
+  cap: number,
+  idx: number[],
+  n: number,
+): KnapsackResult | null {
+  const pw: number[] = [];
+  const pv: number[] = [];
+  const pItem: number[] = [];
+  const pMult: number[] = [];
+  for (const i of idx) {
+    let left = Math.min(u[i], Math.floor(cap / w[i]));
+    for (let mult = 1; left > 0; mult *= 2) {
+      const k = Math.min(mult, left);
+      left -= k;
+      pw.push(w[i] * k);
+      pv.push(v[i] * k);
+      pItem.push(i);
+      pMult.push(k);
+    }
+  }
+  const order = pw.map((_, t) => t).sort((a, b) => pv[b] / pw[b] - pv[a] / pw[a]);
+  const P = order.length;
+  // Best efficiency among pieces from position t on (for the completion bound).
+  const effFrom = new Float64Array(P + 1);
+  for (let t = P - 1; t >= 0; t--) effFrom[t] = Math.max(effFrom[t + 1], pv[order[t]] / pw[order[t]]);
+  // Trace of choices: node = (piece, previous node); a state points at its last node.
+  let nodePiece = new Int32Array(1024);
+  let nodePrev = new Int32Array(1024);
+  let nodes = 0;
+  const push = (piece: number, prev: number): number => {
+    if (nodes === nodePiece.length) {
+      const a = new Int32Array(nodes * 2);
+      a.set(nodePiece);
+      nodePiece = a;
+      const b = new Int32Array(nodes * 2);
+      b.set(nodePrev);
+      nodePrev = b;
+    }
+    nodePiece[nodes] = piece;
+    nodePrev[nodes] = prev;
+    return nodes++;
+  };
+  let W = [0];
+  let V = [0];
+  let N = [-1];
+  // A greedy fill in the same order gives an incumbent value, so the completion bound prunes from the first piece.
+  let greedy = 0;
+  const greedyCounts = new Int32Array(n);
+  {
+    let room = cap;
+    for (const q of order) {
+      if (pw[q] <= room) {
+        room -= pw[q];
+        greedy += pv[q];
+        greedyCounts[pItem[q]] += pMult[q];
+      }
+    }
+  }
+  let best = 0;
+  let bestNode = -1;
+  let work = 0;
+  for (let t = 0; t < P; t++) {
+    const q = order[t];
+    const aw = pw[q];
+    const av = pv[q];
+    const W2: number[] = [];
+    const V2: number[] = [];
+    const N2: number[] = [];
+    const eff = effFrom[t + 1];
+    const keep = (ww: number, vv: number, nn: number): void => {
+      // Dominated by the last kept state, or unable to beat the best even when filled at the best rate left.
+      if (V2.length && vv <= V2[V2.length - 1] + 1e-12) return;
+      const floor = Math.max(best, greedy);
+      if (vv + (cap - ww) * eff <= floor + 1e-10 && vv < floor) return;
+      W2.push(ww);
+      V2.push(vv);
+      N2.push(nn);
+    };
+    let a = 0;
+    let b = 0;
+    const L = W.length;
+    while (a < L || b < L) {
+      const bw = b < L ? W[b] + aw : Infinity;
+      if (b < L && bw > cap) b = L;
+      const useA = a < L && (b >= L || W[a] <= W[b] + aw);
+      if (useA) {
+        keep(W[a], V[a], N[a]);
+        a++;
+      } else {
+        const nv = V[b] + av;
+        const node = push(q, N[b]);
+        if (nv > best) {
+          best = nv;
+          bestNode = node;
+        }
+        keep(W[b] + aw, nv, node);
+        b++;
+      }
+    }
+    W = W2;
+    V = V2;
+    N = N2;
+    work += W.length;
+    if (work > PARETO_STATES) return null;
+  }
+  const trace = (last: number): Int32Array => {
+    const c = new Int32Array(n);
+    for (let node = last; node >= 0; node = nodePrev[node]) c[pItem[nodePiece[node]]] += pMult[nodePiece[node]];
+    return c;
+  };
+  // The surviving states are feasible patterns too: the next best few are cheap extra columns.
+  const others = N.map((node, k) => ({ node, value: V[k] }))
+    .filter((x) => x.node !== bestNode && x.node >= 0)
+    .sort((a, b) => b.value - a.value)
+    .slice(0, 6)
+    .map((x) => ({ value: x.value, counts: trace(x.node) }));
+  if (greedy > best) return { value: greedy, counts: greedyCounts, upper: greedy + 1e-9 * Math.max(1, greedy), exact: true, others };
+  return { value: best, counts: trace(bestNode), upper: best + 1e-9 * Math.max(1, best), exact: true, others };
 }
 
 function dp(

@@ -27,6 +27,8 @@ export interface SolveLimits {
   deadline: number;
   /** Stop as soon as the rounded-up bound reaches this value (nothing better can be found below it). */
   stopAt?: number;
+  /** Pricing rounds allowed (a dive node needs a good LP point, not a proof). */
+  maxRounds?: number;
   now: () => number;
 }
 
@@ -159,6 +161,7 @@ export class Master {
       // The LP optimum lies in [lower, lpValue]: once both round to the same value the rounded bound is final.
       if (this.rounded(lower) >= this.rounded(lpValue) && !this.hasArtificial()) break;
       if (lim.now() > lim.deadline) break;
+      if (lim.maxRounds !== undefined && round + 1 >= lim.maxRounds) break;
       let added = 0;
       for (const c of columns) if (this.addPattern(c) >= 0) added++;
       if (added === 0) {

@@ -137,6 +137,10 @@ export class RevisedSimplex {
     const n0 = this.iterations;
     const { m, binv } = this;
     this.computeDuals();
+    const nCols = this.cols.length;
+    const dj = new Float64Array(nCols);
+    for (let j = 0; j < nCols; j++) dj[j] = this.pos[j] >= 0 ? 0 : this.reducedCost(j);
+    const rowAlpha = new Float64Array(nCols);
     while (this.iterations - n0 < maxIter) {
       if (stop && (this.iterations - n0) % 128 === 127 && stop()) return 'iteration-limit';
       let r = -1;
@@ -152,14 +156,17 @@ export class RevisedSimplex {
       let enter = -1;
       let bestRatio = Infinity;
       let bestAlpha = 0;
-      for (let j = 0; j < this.cols.length; j++) {
-        if (this.pos[j] >= 0) continue;
+      for (let j = 0; j < nCols; j++) {
+        if (this.pos[j] >= 0) {
+          rowAlpha[j] = 0;
+          continue;
+        }
         const col = this.cols[j];
         let a = 0;
         for (let t = 0; t < col.rows.length; t++) a += binv[off + col.rows[t]] * col.vals[t];
+        rowAlpha[j] = a;
         if (a >= -PIVOT_TOL) continue;
-        const d = Math.max(0, this.reducedCost(j));
-        const ratio = d / -a;
+        const ratio = Math.max(0, dj[j]) / -a;
         if (ratio < bestRatio - 1e-12 || (ratio <= bestRatio + 1e-12 && -a > bestAlpha)) {
           bestRatio = ratio;
           bestAlpha = -a;
@@ -167,8 +174,14 @@ export class RevisedSimplex {
         }
       }
       if (enter < 0) return 'infeasible';
+      // Reduced costs move along the pivot row: d_j −= (d_q / α_rq) α_rj.
+      const step = dj[enter] / rowAlpha[enter];
+      for (let j = 0; j < nCols; j++) if (rowAlpha[j] !== 0) dj[j] -= step * rowAlpha[j];
+      const leaving = this.heads[r];
       const alpha = this.ftran(enter);
       this.pivot(r, enter, alpha, this.reducedCost(enter));
+      dj[enter] = 0;
+      dj[leaving] = -step;
     }
     return 'iteration-limit';
   }
@@ -227,14 +240,19 @@ export class RevisedSimplex {
         rowNz[nz++] = k;
       }
     }
+    const dense = nz * 2 > m;
     for (let i = 0; i < m; i++) {
       if (i === r) continue;
       const f = alpha[i];
       if (f > -1e-14 && f < 1e-14) continue;
       const oi = i * m;
-      for (let t = 0; t < nz; t++) {
-        const k = rowNz[t];
-        binv[oi + k] -= f * binv[off + k];
+      if (dense) {
+        for (let k = 0; k < m; k++) binv[oi + k] -= f * binv[off + k];
+      } else {
+        for (let t = 0; t < nz; t++) {
+          const k = rowNz[t];
+          binv[oi + k] -= f * binv[off + k];
+        }
       }
     }
     // New duals y + d_q · (row r of the new inverse): they price the entering column at zero and keep the others.

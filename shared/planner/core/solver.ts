@@ -9,6 +9,13 @@ import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from '.
 import { Master, type LpPoint } from './master';
 import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
+/** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
+const ROOT_SHARE = 0.4;
+/** Pricing rounds per dive node: a node needs a good LP point to guide the next fix, not a proof. */
+const NODE_ROUNDS = 30;
+/** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
+const RESTART_NOISE = 1e6;
+
 export type Phase = 'greedy' | 'bound' | 'improve' | 'done';
 
 export interface CoreProgress {
@@ -22,8 +29,6 @@ export interface CoreOptions {
   /** Absolute time (per `now`) at which to stop improving. */
   deadline: number;
   now: () => number;
-  /** Largest number of discrepancies tried by the search (default 6). */
-  maxDiscrepancy?: number;
 }
 
 export interface CoreResult {
@@ -49,6 +54,7 @@ interface Incumbent {
 
 export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgress, CoreResult, void> {
   const n = p.sizes.length;
+  const t0 = opts.now();
   const qty0 = p.types.map((t) => t.qty);
   const improveTol = p.costUnit > 0 ? p.costUnit / 2 : 1e-9;
 
@@ -110,7 +116,9 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
 
   const master = new Master(p);
   for (const u of best().sol) master.addPattern(u.pattern);
-  const root = master.solve({ deadline: opts.deadline, now: opts.now, stopAt: best().cost - improveTol });
+  // The root may not converge on hard instances; leave most of the time to the dives, which keep generating columns.
+  const rootDeadline = t0 + (opts.deadline - t0) * ROOT_SHARE;
+  const root = master.solve({ deadline: rootDeadline, now: opts.now, stopAt: best().cost - improveTol });
   lower = Math.max(lower, master.rounded(root.lowerBound));
   const lpBound = root.lowerBound;
   yield { phase: 'bound', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
@@ -136,7 +144,12 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     }
   };
 
-  const maxDisc = opts.maxDiscrepancy ?? 6;
+  let noise = 0;
+  let seed = 12345;
+  const rng = (): number => {
+    seed = (seed * 1103515245 + 12345) & 0x7fffffff;
+    return seed / 0x80000000;
+  };
   let exhausted = true;
 
   function* dive(
@@ -157,7 +170,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     }
     stats.nodes++;
     master.setResidual(demand, qty);
-    const pt = master.solve({ deadline: opts.deadline, now: opts.now, stopAt: best().cost - fixedCost - improveTol });
+    const pt = master.solve({ deadline: opts.deadline, now: opts.now, stopAt: best().cost - fixedCost - improveTol, maxRounds: NODE_ROUNDS });
     yield { phase: 'improve', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
     const resLower = master.rounded(pt.lowerBound);
     if (fixedCost + resLower >= best().cost - improveTol) return;
@@ -172,23 +185,29 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
         const waste = p.types[s.pattern.type].capacity - loadWithin(p, s.pattern, demand);
         return { s, r, score: Math.round(Math.abs(s.value - r) * 1e6), waste };
       })
-      .sort((a, b) => a.score - b.score || a.waste - b.waste || b.s.value - a.s.value);
+      .map((c) => ({ ...c, noise: noise > 0 ? rng() * noise : 0 }))
+      .sort((a, b) => a.score + a.noise - (b.score + b.noise) || a.waste - b.waste || b.s.value - a.s.value);
     if (cands.length === 0) return;
     const width = Math.min(cands.length, 1 + budget - disc);
     if (cands.length > width) exhausted = false;
     const localTabu = new Set(tabu);
     for (let k = 0; k < width; k++) {
       if (closed()) return;
-      const { s, r } = cands[k];
+      const { s } = cands[k];
       const d = Int32Array.from(demand);
       const q = Int32Array.from(qty);
       const next = fixed.slice();
       let cost = fixedCost;
-      for (let c = 0; c < r; c++) {
-        const use = take(p, s.pattern, d, q);
-        if (!use) break;
-        next.push({ pattern: use, mult: 1 });
-        cost += p.types[use.type].cost;
+      // The first child also fixes every other column at an integral value (all of them stay in an optimal
+      // solution of the residual), which shortens each dive several times over.
+      const group = k === 0 ? cands.filter((c) => c.score <= 1 && c.r === Math.round(c.s.value)) : [];
+      for (const { s: col, r } of group.length ? group : [cands[k]]) {
+        for (let c = 0; c < r; c++) {
+          const use = take(p, col.pattern, d, q);
+          if (!use) break;
+          next.push({ pattern: use, mult: 1 });
+          cost += p.types[use.type].cost;
+        }
       }
       if (next.length === fixed.length) continue;
       yield* dive(next, cost, d, q, localTabu, disc + k, budget);
@@ -196,10 +215,11 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     }
   }
 
-  for (let budget = 0; budget <= maxDisc && !closed(); budget++) {
-    exhausted = true;
-    yield* dive([], 0, Int32Array.from(p.demand), Int32Array.from(p.types, (t) => t.qty ?? 0), new Set(), 0, budget);
-    if (exhausted) break;
+  // A first deterministic dive with one discrepancy allowed, then restarts that perturb the fixing order.
+  for (let round = 0; !closed(); round++) {
+    noise = round === 0 ? 0 : RESTART_NOISE;
+    yield* dive([], 0, Int32Array.from(p.demand), Int32Array.from(p.types, (t) => t.qty ?? 0), new Set(), 0, 1);
+    if (round === 0 && exhausted) break;
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);
