@@ -23,6 +23,14 @@ export function shopCutList(report: FrameReport): ShopCutList {
       members: [...new Set(l.member_ids.map((id) => names.get(id) ?? id))],
     })),
     hardware: report.hardware.lines.map((h) => ({ key: h.key, kind: h.kind, name: h.name, qty: h.count, spares: Math.max(0, h.order_qty - h.count), toBuy: h.order_qty })),
-    nutWarnings: report.hardware.t_nut_order.map((t) => ({ mark: t.mark, message: t.message })),
+    nutWarnings: report.hardware.t_nut_order.map((t) => ({
+      mark: t.mark,
+      message: t.message,
+      member: names.get(t.member_id) ?? t.member_id,
+      face: t.face,
+      slot: t.slot,
+      count: t.count,
+      closedBy: t.closed_by.map((id) => names.get(id) ?? id),
+    })),
   };
 }

@@ -36,9 +36,12 @@ export function cutJobs(report: FrameReport, offers: readonly StockOffer[], shel
     const general: StockInput[] = offers.filter((o) => o.profileId === null).map((o) => ({ length: o.length_mm, price: o.price }));
     let stock = bought.length ? bought : general;
     if (!stock.some((x) => x.length - s.trim_mm >= longest)) stock = [...stock, { length: Math.max(FALLBACK_STOCK_MM, Math.ceil(longest + s.trim_mm)), price: 0 }];
-    const onShelf: StockInput[] = shelf
-      .filter((o) => o.profileId === profileId && o.qty > 0 && o.length_mm >= s.trim_mm + shortest)
-      .map((o) => ({ length: o.length_mm, qty: o.qty, price: 0, label: 'offcut on hand' }));
+    // Offcuts of one length are one kind of stock, however many rows they came in on.
+    const byLength = new Map<number, number>();
+    for (const o of shelf) {
+      if (o.profileId === profileId && o.qty > 0 && o.length_mm >= s.trim_mm + shortest) byLength.set(o.length_mm, (byLength.get(o.length_mm) ?? 0) + o.qty);
+    }
+    const onShelf: StockInput[] = [...byLength].sort((a, b) => b[0] - a[0]).map(([length, qty]) => ({ length, qty, price: 0, label: 'offcut on hand' }));
     return {
       profileId,
       profileName: e.name,

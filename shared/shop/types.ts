@@ -39,7 +39,16 @@ export type ShopHardware = {
 };
 
 /** A slide-in T-nut that must go into a slot before that slot's ends are closed. */
-export type ShopNutWarning = { mark: string | null; message: string };
+export type ShopNutWarning = {
+  mark: string | null;
+  message: string;
+  /** The member whose slot it is, the face and slot, how many nuts, and the members that close the slot's ends. */
+  member?: string;
+  face?: string;
+  slot?: number;
+  count?: number;
+  closedBy?: string[];
+};
 
 export type ShopCutList = {
   kerf_mm: number;
