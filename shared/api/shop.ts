@@ -112,6 +112,7 @@ export type CutTickView = { cutKey: string; mark: string; tickedBy: z.infer<type
 export type CuttingState = {
   frameId: string;
   frameName: string;
+  projectName: string;
   currentVersion: number;
   session: { id: string; frameVersion: number; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
   ticks: CutTickView[];

@@ -49,6 +49,7 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
   return {
     frameId: frame.id,
     frameName: frame.name,
+    projectName: frame.project.name,
     currentVersion: frame.version,
     session: session
       ? {
