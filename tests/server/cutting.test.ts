@@ -127,16 +127,19 @@ describe('printed documents and CSV for a frame', () => {
     const res = await binary(c('viewer').get(`/api/frames/${w.frameId}/shop/saw-list.pdf`));
     expect(res.status).toBe(200);
     const text = await pdfText(res.body as Buffer);
-    const cuts = s.session!.plan.plans.flatMap((p) => p.bars.flatMap((b) => b.cuts));
-    const byLength = new Map<string, number>();
-    for (const cut of cuts) byLength.set(formatLength(cut.length_mm, 'mm'), (byLength.get(formatLength(cut.length_mm, 'mm')) ?? 0) + 1);
-    for (const [len, n] of byLength) {
+    const bars = s.session!.plan.plans.flatMap((p) => p.bars);
+    const cuts = bars.flatMap((b) => b.cuts);
+    // Every length printed: one per cut row, one per leftover row, one per bar heading (its stock length).
+    const expected = new Map<string, number>();
+    const add = (mm: number) => expected.set(formatLength(mm, 'mm'), (expected.get(formatLength(mm, 'mm')) ?? 0) + 1);
+    cuts.forEach((c) => add(c.length_mm));
+    bars.forEach((b) => add(b.leftover_mm));
+    for (const [len, n] of expected) {
       const escaped = len.replace('.', '\\.');
-      // each cut's row shows its length once; the offcut/waste rows may repeat a length, so at least n
-      expect(text.match(new RegExp(`(?<![\\d.])${escaped}`, 'g'))?.length ?? 0).toBeGreaterThanOrEqual(n);
+      const printed = text.match(new RegExp(`(?<![\\d.])${escaped}(?! (stock|offcut from))`, 'g'))?.length ?? 0;
+      expect(printed, len).toBe(n);
     }
-    const bars = s.session!.plan.plans.reduce((n, p) => n + p.bars.length, 0);
-    expect(text.match(/Bar \d+ of \d+/g)?.length).toBe(bars);
+    expect(text.match(/Bar \d+ of \d+/g)?.length).toBe(bars.length);
     for (const mark of new Set(cuts.map((x) => x.mark))) expect(text).toMatch(new RegExp(`\\b${mark}\\b`));
   });
 
