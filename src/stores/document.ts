@@ -1,4 +1,4 @@
-import { computed, ref, shallowRef, triggerRef } from 'vue';
+import { computed, ref, shallowRef } from 'vue';
 import { defineStore } from 'pinia';
 import type { Frame, VersionConflictCurrent } from '@shared/api';
 import { applyChange, diffDocuments, isEmptyChange, touchedIds, type Change } from '@shared/editing/change';
@@ -239,10 +239,6 @@ export const useDocumentStore = defineStore('document', () => {
   function dismissRefusal(): void {
     refusal.value = null;
   }
-  /** Re-draw after something outside the document changed (display units). */
-  function touch(): void {
-    triggerRef(scene);
-  }
 
   return {
     frameId,
@@ -275,6 +271,5 @@ export const useDocumentStore = defineStore('document', () => {
     keepMine,
     dismissSummary,
     dismissRefusal,
-    touch,
   };
 });
