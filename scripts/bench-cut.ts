@@ -8,7 +8,7 @@ import { runInstance, type InstanceResult } from './bench-cut/run-instance';
 import { summarise, formatSummary } from './bench-cut/summary';
 
 function parseArgs(argv: string[]) {
-  const out = { quick: false, timeLimitMs: 5000, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
+  const out = { quick: false, timeLimitMs: 8000, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     if (a === '--quick') out.quick = true;

@@ -49,6 +49,7 @@ export class Master {
   demand: Int32Array;
   qtyLeft: Int32Array;
   knapsackCalls = 0;
+  private readonly doiColumns: number[] = [];
 
   constructor(p: Problem) {
     this.p = p;
@@ -79,7 +80,7 @@ export class Master {
       } else this.crashBasis[i] = art;
     }
     for (let i = 0; i + 1 < this.n; i++) {
-      this.addAux(Int32Array.of(i, i + 1), Float64Array.of(-1, 1), 0);
+      this.doiColumns.push(this.addAux(Int32Array.of(i, i + 1), Float64Array.of(-1, 1), 0));
     }
     p.types.forEach((_, t) => {
       const r = this.limitedRow[t];
@@ -87,6 +88,14 @@ export class Master {
     });
     this.lp.setBasis(this.crashBasis);
     this.lp.setRhs(this.rhs());
+  }
+
+  /**
+   * Switch the dual-optimal inequalities on or off (off: priced out at the artificial cost). They speed up the root, but a diving LP that leans on them
+   * covers small items by large items' slots, which fixing a pattern then cannot reproduce.
+   */
+  useDualInequalities(on: boolean): void {
+    for (const j of this.doiColumns) this.lp.setCost(j, on ? 0 : this.bigM);
   }
 
   private addAux(rows: Int32Array, vals: Float64Array, cost: number): number {

@@ -6,7 +6,7 @@
 export interface LpColumn {
   readonly rows: Int32Array;
   readonly vals: Float64Array;
-  readonly cost: number;
+  cost: number;
 }
 
 export type LpStatus = 'optimal' | 'iteration-limit' | 'infeasible';
@@ -46,6 +46,11 @@ export class RevisedSimplex {
     this.cols.push(col);
     this.pos.push(-1);
     return this.cols.length - 1;
+  }
+
+  /** Change a column's cost (the duals are recomputed at the next solve). */
+  setCost(j: number, cost: number): void {
+    this.cols[j].cost = cost;
   }
 
   /** Install a basis (one column per row) and factorise it. Returns false when the columns are singular. */

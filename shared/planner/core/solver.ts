@@ -10,7 +10,7 @@ import { Master, type LpPoint } from './master';
 import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
 /** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
-const ROOT_SHARE = 0.4;
+const ROOT_SHARE = 0.7;
 /** Pricing rounds per dive node: a node needs a good LP point to guide the next fix, not a proof. */
 const NODE_ROUNDS = 30;
 /** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
@@ -88,6 +88,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   const greedyCost = (inc as Incumbent).cost;
   const greedyBars = (inc as Incumbent).bars;
   const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;
+  const singleBarObjective = unitCost && p.types.length === 1 && p.types[0].qty === null;
   const cmax = Math.max(...p.types.map((t) => t.capacity));
   const barBound = martelloTothL2(p.sizes, p.demand, cmax);
 
@@ -178,13 +179,23 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     if (fixedCost + resLower >= best().cost - improveTol || closed()) return;
     // Fix first the column whose value is nearest a positive integer; among equals, the fullest bar (a near-perfect
     // packing leaves no room for waste) and then the largest value.
+    // With one stock length, a solution one bar better than the incumbent leaves a known total slack; a bar wasting
+    // more than that can never be part of it (for exactly-filled lists the slack is zero).
+    let slack = Infinity;
+    if (singleBarObjective) {
+      let rest = 0;
+      for (let i = 0; i < n; i++) rest += demand[i] * p.sizes[i];
+      slack = (best().bars - 1 - fixed.length) * p.types[0].capacity - rest;
+    }
     const cands = pt.support
-      .filter((s) => !tabu.has(patternKey(s.pattern)) && useful(s.pattern, demand))
+      .filter((s) => !tabu.has(patternKey(s.pattern)))
       .map((s) => {
         const r = Math.max(1, Math.round(s.value));
-        const waste = p.types[s.pattern.type].capacity - loadWithin(p, s.pattern, demand);
+        const use = take(p, s.pattern, Int32Array.from(demand), Int32Array.from(qty));
+        const waste = use ? p.types[use.type].capacity - loadWithin(p, use, demand) : Infinity;
         return { s, r, score: Math.round(Math.abs(s.value - r) * 1e6), waste };
       })
+      .filter((c) => c.waste <= slack)
       .map((c) => ({ ...c, noise: noise > 0 ? rng() * noise : 0 }))
       .sort((a, b) => a.score + a.noise - (b.score + b.noise) || a.waste - b.waste || b.s.value - a.s.value);
     if (cands.length === 0) return;
@@ -200,7 +211,15 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       let cost = fixedCost;
       // The first child also fixes every other column at an integral value (all of them stay in an optimal
       // solution of the residual), which shortens each dive several times over.
-      const group = k === 0 ? cands.filter((c) => c.score <= 1 && c.r === Math.round(c.s.value)) : [];
+      let budgetWaste = slack;
+      const group =
+        k === 0
+          ? cands.filter((c) => {
+              if (c.score > 1 || c.r !== Math.round(c.s.value) || c.waste * c.r > budgetWaste) return false;
+              budgetWaste -= c.waste * c.r;
+              return true;
+            })
+          : [];
       for (const { s: col, r } of group.length ? group : [cands[k]]) {
         for (let c = 0; c < r; c++) {
           const use = take(p, col.pattern, d, q);
@@ -216,18 +235,17 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   }
 
   // A first deterministic dive with one discrepancy allowed, then restarts that perturb the fixing order.
+  // Restarts alternate the dual-optimal inequalities off and on: with them, the LP covers small items by larger
+  // items' slots, which suits lists of nearly distinct lengths; without them, fixed patterns are what the LP meant,
+  // which suits lists with many repeats of each length.
   for (let round = 0; !closed(); round++) {
-    noise = round === 0 ? 0 : RESTART_NOISE;
+    noise = round < 2 ? 0 : RESTART_NOISE;
+    master.useDualInequalities(round % 2 === 0);
     yield* dive([], 0, Int32Array.from(p.demand), Int32Array.from(p.types, (t) => t.qty ?? 0), new Set(), 0, 1);
     if (round === 0 && exhausted) break;
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);
-}
-
-function useful(pt: Pattern, demand: Int32Array): boolean {
-  for (let i = 0; i < demand.length; i++) if (pt.counts[i] > 0 && demand[i] > 0) return true;
-  return false;
 }
 
 /** Load of a pattern counting only items still demanded. */
@@ -256,15 +274,16 @@ function take(p: Problem, pt: Pattern, demand: Int32Array, qty: Int32Array): Pat
       any = true;
     }
   }
-  if (!any) return null;
   for (let i = 0; i < counts.length && room >= p.sizes[p.sizes.length - 1]; i++) {
     if (demand[i] > 0 && p.sizes[i] <= room) {
       const c = Math.min(demand[i], Math.floor(room / p.sizes[i]));
       counts[i] += c;
       demand[i] -= c;
       room -= c * p.sizes[i];
+      any = true;
     }
   }
+  if (!any) return null;
   if (p.types[pt.type].qty !== null) qty[pt.type]--;
   return { type: pt.type, counts };
 }
@@ -275,6 +294,7 @@ function take(p: Problem, pt: Pattern, demand: Int32Array, qty: Int32Array): Pat
  */
 export function combinatorialBound(p: Problem): number {
   const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;
+  const singleBarObjective = unitCost && p.types.length === 1 && p.types[0].qty === null;
   const cmax = Math.max(...p.types.map((t) => t.capacity));
   if (unitCost) return martelloTothL2(p.sizes, p.demand, cmax);
   let need = 0;
