@@ -49,7 +49,7 @@ export async function seedDemoData(orm: Orm): Promise<boolean> {
       workshop,
       name: DEMO_PROJECT,
       client: 'Lee Marsh',
-      notes: 'Galley behind the rear seats: 65 L compressor fridge, sink with 20 L water tank, drawer stack. Invented demo job.',
+      notes: 'Pod behind the rear doors: pantry pull-out, compressor cooler, 30 L fresh water tank and a cooktop drawer. Invented demo job.',
     });
     const { document, memberCount } = checkFrameDocument(demoFrameJson());
     em.create(Frame, {
