@@ -21,6 +21,7 @@ import { ordersRouter } from './modules/orders/orders.routes';
 import { outboxRouter } from './modules/outbox/outbox.routes';
 import { stockRouter } from './modules/stock/stock.routes';
 import { suppliersRouter } from './modules/suppliers/suppliers.routes';
+import { plannerRouter } from './modules/planner/planner.routes';
 
 export interface Services {
   orm: Orm;
@@ -94,6 +95,7 @@ export function createApp(services: Services): Express {
   api.use(stockRouter(orm));
   api.use(attachmentsRouter(orm));
   api.use(outboxRouter(orm, config));
+  api.use(plannerRouter());
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

@@ -1,0 +1,45 @@
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { ApiClient, signedIn } from '../support/api-client';
+import { makeUser } from '../support/factories';
+import { createTestContext, truncateAll, type TestContext } from '../support/test-app';
+
+let ctx: TestContext;
+beforeAll(async () => {
+  ctx = await createTestContext();
+  await truncateAll(ctx.orm);
+});
+afterAll(() => ctx.close());
+afterEach(() => {
+  expect(ctx.loggedErrors).toEqual([]);
+});
+
+const job = { kerf: 3, trim: 0, minOffcut: 100, stock: [{ length: 6000, price: 30, qty: null }], parts: [{ length: 1200, qty: 4, label: 'A' }] };
+
+describe('POST /api/plan/cut', () => {
+  it('plans a pasted job for a signed-in user', async () => {
+    const client = await signedIn(ctx.app, await makeUser(ctx.orm));
+    const res = await client.post('/api/plan/cut', { job, timeLimitMs: 200 }).expect(200);
+    // By hand: 4 × 1200 + 3 × 3 = 4809 mm on one 6000 mm bar; the 1191 mm leftover keeps 1188 mm after one more kerf.
+    expect(res.body).toMatchObject({ barCount: 1, lowerBound: 1, optimal: true, cost: 30 });
+    expect(res.body.bars[0].offcut).toBe(1188);
+  });
+
+  it('refuses a caller who is not signed in', async () => {
+    const anon = new ApiClient(ctx.app);
+    await anon.fetchCsrf();
+    expect((await anon.post('/api/plan/cut', { job })).status).toBe(401);
+  });
+
+  it('names the bad field and the part at fault', async () => {
+    const client = await signedIn(ctx.app, await makeUser(ctx.orm));
+    const neg = await client.post('/api/plan/cut', { job: { ...job, kerf: -1 } });
+    expect(neg.status).toBe(400);
+    expect(neg.body.error.fields['job.kerf']).toBeTruthy();
+    const long = await client.post('/api/plan/cut', { job: { ...job, parts: [{ length: 7000, qty: 1, label: 'A' }] } });
+    expect(long.status).toBe(422);
+    expect(long.body.error.message).toContain("part 'A' (7000 mm) is longer than every stock bar (6000 mm)");
+    const slow = await client.post('/api/plan/cut', { job, timeLimitMs: 60_000 });
+    expect(slow.status).toBe(400);
+    expect(slow.body.error.fields.timeLimitMs).toBeTruthy();
+  });
+});
