@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
 import { createScratchProject, deleteScratchProject, openFrameCopy, pickMember, type ScratchProject } from './editor-helpers';
 
 /** Someone else's save, made through the API behind the editor's back: the document without one cross-member. */
@@ -26,25 +26,24 @@ async function serverFrame(page: Page, frameId: string): Promise<{ version: numb
 const statusText = (page: Page) => page.locator('.frame-editor__status').innerText();
 
 describe('two people save the same frame', () => {
-  let browser: Browser;
   let page: Page;
   let project: ScratchProject;
   let frameId = '';
   const doc = demoFrameDocument();
   const theirs = { ...doc, members: doc.members.filter((m) => m.id !== 'galley-x0-top') };
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-    await signIn(page, DEMO.owner);
-    project = await createScratchProject(page, `Editor conflict test ${Date.now().toString(36)}`);
-    const path = await openFrameCopy(page, project, 'Kitchen pod, conflict test', doc);
-    frameId = path.split('/').pop() as string;
-  });
-  afterAll(async () => {
-    if (project) await deleteScratchProject(page, project).catch(() => undefined);
-    await browser?.close();
-  });
+  useBrowserPage(
+    async (opened) => {
+      page = opened;
+      await signIn(page, DEMO.owner);
+      project = await createScratchProject(page, `Editor conflict test ${Date.now().toString(36)}`);
+      const path = await openFrameCopy(page, project, 'Kitchen pod, conflict test', doc);
+      frameId = path.split('/').pop() as string;
+    },
+    async (opened) => {
+      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
+    },
+  );
 
   async function nudgeAnUpright(): Promise<void> {
     await pickMember(page, 'galley-u4-f');

@@ -1,30 +1,29 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { computeReport, type FrameReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
 import { createScratchProject, cutListRows, deleteScratchProject, fieldValue, itemInView, openFrameCopy, toScreen, type ScratchProject } from './editor-helpers';
 
 describe('drawing in the frame editor', () => {
-  let browser: Browser;
   let page: Page;
   let project: ScratchProject;
   const doc = demoFrameDocument();
   let report: FrameReport;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-    report = computeReport(doc);
-    await signIn(page, DEMO.owner);
-    project = await createScratchProject(page, `Editor drawing test ${Date.now().toString(36)}`);
-    await openFrameCopy(page, project, 'Kitchen pod, drawing test', doc);
-  });
-  afterAll(async () => {
-    if (project) await deleteScratchProject(page, project).catch(() => undefined);
-    await browser?.close();
-  });
+  useBrowserPage(
+    async (opened) => {
+      page = opened;
+      report = computeReport(doc);
+      await signIn(page, DEMO.owner);
+      project = await createScratchProject(page, `Editor drawing test ${Date.now().toString(36)}`);
+      await openFrameCopy(page, project, 'Kitchen pod, drawing test', doc);
+    },
+    async (opened) => {
+      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
+    },
+  );
 
   it('draws a rail between two uprights and lists its cut length, face to face', async () => {
     // The front uprights either side of the cooler's bay.

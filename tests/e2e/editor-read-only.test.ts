@@ -1,18 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DEMO, launchBrowser, newPage, openDemoFrame, screenshotPath, signIn } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DEMO, openDemoFrame, screenshotPath, signIn, useBrowserPage } from './support/browser';
 import { fieldValue, pickMember } from './editor-helpers';
 
 describe('a viewer sees the frame editor read-only', () => {
-  let browser: Browser;
   let page: Page;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-  });
-  afterAll(async () => {
-    await browser?.close();
+  useBrowserPage((opened) => {
+    page = opened;
   });
 
   it('shows the drawing and the results but offers no edits', async () => {

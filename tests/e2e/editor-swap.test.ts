@@ -1,32 +1,31 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { computeReport, type FrameReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
 import { createScratchProject, cutListRows, deleteScratchProject, fieldValue, itemInView, openFrameCopy, pickMember, toScreen, type ScratchProject } from './editor-helpers';
 
 const qtyOf = (rows: string[][], length: string) => rows.filter((r) => r[2] === length).reduce((n, r) => n + Number(r[3]), 0);
 
 describe('swapping modules re-lays the frame', () => {
-  let browser: Browser;
   let page: Page;
   let project: ScratchProject;
   const doc = demoFrameDocument();
   let report: FrameReport;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-    report = computeReport(doc);
-    await signIn(page, DEMO.owner);
-    project = await createScratchProject(page, `Editor swap test ${Date.now().toString(36)}`);
-    await openFrameCopy(page, project, 'Kitchen pod, swap test', doc);
-  });
-  afterAll(async () => {
-    if (project) await deleteScratchProject(page, project).catch(() => undefined);
-    await browser?.close();
-  });
+  useBrowserPage(
+    async (opened) => {
+      page = opened;
+      report = computeReport(doc);
+      await signIn(page, DEMO.owner);
+      project = await createScratchProject(page, `Editor swap test ${Date.now().toString(36)}`);
+      await openFrameCopy(page, project, 'Kitchen pod, swap test', doc);
+    },
+    async (opened) => {
+      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
+    },
+  );
 
   it('moves the upright between the cooler and the tank, changes the cut list, and undo puts it all back', async () => {
     const cooler = doc.modules.find((m) => m.id === 'cooler')!;

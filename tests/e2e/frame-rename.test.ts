@@ -1,17 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DEMO, launchBrowser, newPage, openDemoFrame, signIn } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DEMO, openDemoFrame, signIn, useBrowserPage } from './support/browser';
 
 describe('a designer renames a frame', () => {
-  let browser: Browser;
   let page: Page;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-  });
-  afterAll(async () => {
-    await browser?.close();
+  useBrowserPage((opened) => {
+    page = opened;
   });
 
   it('keeps the new name after a reload', async () => {

@@ -1,17 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DEMO, DEMO_PROJECT, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DEMO, DEMO_PROJECT, screenshotPath, signIn, useBrowserPage } from './support/browser';
 
 describe('the projects page', () => {
-  let browser: Browser;
   let page: Page;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
-  });
-  afterAll(async () => {
-    await browser?.close();
+  useBrowserPage((opened) => {
+    page = opened;
   });
 
   it('lists the demo project, searches, and is captured for review', async () => {

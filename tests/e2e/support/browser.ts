@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 const CHROMIUM = '/usr/bin/chromium';
 const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'];
@@ -31,6 +32,28 @@ export async function newPage(browser: Browser): Promise<Page> {
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   return page;
+}
+
+/**
+ * For a describe block: launches the browser and opens a fresh page before its tests, and closes the browser after.
+ * `ready` receives the open page (keep it, and sign in or open a frame there); `beforeClose` tidies up with the page
+ * still open, e.g. deletes what the tests created.
+ */
+export function useBrowserPage(
+  ready: (page: Page) => void | Promise<void>,
+  beforeClose?: (page: Page) => void | Promise<void>,
+): void {
+  let browser: Browser | undefined;
+  let page: Page | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    page = await newPage(browser);
+    await ready(page);
+  });
+  afterAll(async () => {
+    if (page && beforeClose) await beforeClose(page);
+    await browser?.close();
+  });
 }
 
 export const DEMO_PASSWORD = 'slotwright-demo';
