@@ -20,6 +20,7 @@ export interface RouteNamedMap {
   suppliers: RouteRecordInfo<'suppliers', '/w/:workshopId/suppliers', WorkshopParams, WorkshopParams>;
   orders: RouteRecordInfo<'orders', '/w/:workshopId/orders', WorkshopParams, WorkshopParams>;
   outbox: RouteRecordInfo<'outbox', '/w/:workshopId/outbox', WorkshopParams, WorkshopParams>;
+  planner: RouteRecordInfo<'planner', '/planner', NoParams, NoParams>;
   forbidden: RouteRecordInfo<'forbidden', '/forbidden', NoParams, NoParams>;
   'not-found': RouteRecordInfo<'not-found', '/:pathMatch(.*)*', { pathMatch: string | string[] }, { pathMatch: string[] }>;
 }
@@ -77,6 +78,7 @@ export const routes: RouteRecordRaw[] = [
   { path: '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', name: 'cutting', component: () => import('@/views/CuttingView.vue'), meta: { requires: 'read', title: 'Cutting' } },
   { path: '/w/:workshopId/suppliers', name: 'suppliers', component: () => import('@/views/SuppliersView.vue'), meta: { requires: 'read', title: 'Suppliers and stock' } },
   { path: '/w/:workshopId/orders', name: 'orders', component: () => import('@/views/OrdersView.vue'), meta: { requires: 'read', title: 'Orders' } },
+  { path: '/planner', name: 'planner', component: () => import('@/views/QuickPlannerView.vue'), meta: { title: 'Quick planner' } },
   { path: '/w/:workshopId/outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { requires: 'workshop.manage', title: 'Outbox' } },
   {
     path: '/forbidden',
