@@ -1,13 +1,16 @@
 import Papa from 'papaparse';
-import { PDFParse } from 'pdf-parse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { CuttingState } from '@shared/api/shop';
 import { computeReport } from '@shared/engine/report';
 import { parseFrameDocument } from '@shared/model/parse';
 import { formatLength } from '@shared/geometry/units';
-import { ACTORS, demoDocument, refusal, shopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, demoDocument, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
+import { pdfText } from '../support/pdf-text';
 
 let w: ShopWorld;
+useShopWorld((world) => {
+  w = world;
+});
 const c = (a: Actor) => w.clients.get(a)!;
 const url = () => `/api/frames/${w.frameId}/cutting`;
 const keysOf = (s: CuttingState): string[] => s.session!.plan.plans.flatMap((p) => p.bars.flatMap((b, bi) => b.cuts.map((_, ci) => `${p.profileId}/${bi}/${ci}`)));
@@ -18,22 +21,6 @@ const binary = (res: import('supertest').Test) =>
     r.on('data', (d: Buffer) => chunks.push(d));
     r.on('end', () => cb(null, Buffer.concat(chunks)));
   });
-
-async function pdfText(buf: Buffer): Promise<string> {
-  const p = new PDFParse({ data: new Uint8Array(buf) });
-  try {
-    return (await p.getText()).text;
-  } finally {
-    await p.destroy();
-  }
-}
-
-beforeAll(async () => {
-  w = await shopWorld();
-}, 120_000);
-afterAll(async () => {
-  await w?.close();
-});
 
 describe('cutting at the saw', () => {
   it.each(ACTORS)('%s: reading the cutting state is for members', async (a) => {
@@ -126,7 +113,7 @@ describe('printed documents and CSV for a frame', () => {
     const s = (await c('viewer').get(url())).body as CuttingState;
     const res = await binary(c('viewer').get(`/api/frames/${w.frameId}/shop/saw-list.pdf`));
     expect(res.status).toBe(200);
-    const text = await pdfText(res.body as Buffer);
+    const { text } = await pdfText(res.body as Buffer);
     const bars = s.session!.plan.plans.flatMap((p) => p.bars);
     const cuts = bars.flatMap((b) => b.cuts);
     // Every length printed: one per cut row, one per leftover row, one per bar heading (its stock length).

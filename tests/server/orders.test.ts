@@ -1,10 +1,13 @@
 import Papa from 'papaparse';
-import { PDFParse } from 'pdf-parse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { OrderDetail, Supplier } from '@shared/api/shop';
-import { ACTORS, refusal, shopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
+import { pdfText } from '../support/pdf-text';
 
 let w: ShopWorld;
+useShopWorld((world) => {
+  w = world;
+});
 const c = (a: Actor) => w.clients.get(a)!;
 const EDITORS: Actor[] = ['owner', 'designer'];
 const MEMBERS: Actor[] = ['owner', 'designer', 'cutter', 'viewer'];
@@ -19,22 +22,6 @@ const supplierBody = {
   ],
   cutFee: 1.2,
 };
-
-async function pdfText(buf: Buffer): Promise<string> {
-  const p = new PDFParse({ data: new Uint8Array(buf) });
-  try {
-    return (await p.getText()).text;
-  } finally {
-    await p.destroy();
-  }
-}
-
-beforeAll(async () => {
-  w = await shopWorld();
-}, 120_000);
-afterAll(async () => {
-  await w?.close();
-});
 
 describe('suppliers', () => {
   it.each(ACTORS)('%s: create follows the role (owner and designer only)', async (a) => {
@@ -106,7 +93,7 @@ describe('orders', () => {
     });
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
-    const text = await pdfText(pdf.body as Buffer);
+    const { text } = await pdfText(pdf.body as Buffer);
     expect(text).toContain(order.reference);
     expect(text).toContain('Northgate Metals');
     const csv = await c('cutter').get(`/api/orders/${order.id}/order.csv`);

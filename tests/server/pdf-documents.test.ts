@@ -1,4 +1,3 @@
-import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
 import { drillSheet } from '@shared/shop/drill-list';
 import { partLabels } from '@shared/shop/labels';
@@ -8,16 +7,7 @@ import { sawSheet } from '@shared/shop/saw-list';
 import { drillListPdf, labelsPdf, orderListPdf, pickListPdf, sawListPdf } from '../../server/pdf';
 import { planCutsSync } from '@shared/planner';
 import { cutList, jobs, meta, plans } from '../shared/shop/fixtures';
-
-async function pdfText(buf: Buffer): Promise<{ text: string; pages: string[] }> {
-  const parser = new PDFParse({ data: new Uint8Array(buf) });
-  try {
-    const r = await parser.getText();
-    return { text: r.text, pages: r.pages.map((p) => p.text) };
-  } finally {
-    await parser.destroy();
-  }
-}
+import { pdfText } from '../support/pdf-text';
 
 const count = (text: string, re: RegExp): number => text.match(new RegExp(re.source, 'g'))?.length ?? 0;
 

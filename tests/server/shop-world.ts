@@ -1,6 +1,7 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import type { Role } from '@shared/api/roles';
 import { demoFrameDocument } from '@shared/model/demo-frame';
 import type { FrameDocumentJson } from '@shared/api/frames';
@@ -69,6 +70,18 @@ export async function shopWorld(): Promise<ShopWorld> {
       rmSync(mailDir, { recursive: true, force: true });
     },
   };
+}
+
+/** For a test file: builds the shop world before its tests and closes it after; `ready` receives it. */
+export function useShopWorld(ready: (world: ShopWorld) => void): void {
+  let world: ShopWorld | undefined;
+  beforeAll(async () => {
+    world = await shopWorld();
+    ready(world);
+  }, 120_000);
+  afterAll(async () => {
+    await world?.close();
+  });
 }
 
 /** Status a refused caller gets: 401 anonymous, 404 outside the workshop, 403 a member without the capability. */

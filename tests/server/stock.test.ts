@@ -1,20 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { CustomProfileView, ImportResult, Offcut } from '@shared/api/shop';
-import { ACTORS, refusal, shopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 
 let w: ShopWorld;
+useShopWorld((world) => {
+  w = world;
+});
 const c = (a: Actor) => w.clients.get(a)!;
 const EDITORS: Actor[] = ['owner', 'designer'];
 const MEMBERS: Actor[] = ['owner', 'designer', 'cutter', 'viewer'];
 
 const upload = (a: Actor, path: string, text: string, name = 'stock.csv') => c(a).post(path).attach('file', Buffer.from(text, 'utf8'), { filename: name, contentType: 'text/csv' });
-
-beforeAll(async () => {
-  w = await shopWorld();
-}, 120_000);
-afterAll(async () => {
-  await w?.close();
-});
 
 describe('offcuts on the shelf from CSV', () => {
   const csv = ['profile,length,quantity', '30x30-s8,1200,2', '30×30 slot 8,600 mm,1', 'mystery,500,1', '30x30-s8,-40,1', '30x30-s8,2 ft,'].join('\n');
