@@ -1,12 +1,12 @@
-import type { Fastener } from '../catalog/profiles';
 import type { Axis, Vec3 } from '../model/axis';
 import type { Bearing, ModuleKind } from '../model/module';
 import type { MemberRole } from '../model/member';
 import type { ToleranceClass } from '../model/settings';
 import type { FaceName } from './faces';
-import type { HardwareKind } from './hardware';
+import type { HardwareLine } from './hardware';
 import type { EndName, EndRole, JointKind } from './joints';
 import type { MachiningOp } from './machining';
+import type { SpanCheck } from './member-checks';
 import type { ReportWarning } from './warnings';
 
 /**
@@ -115,16 +115,7 @@ export type CutListLine = {
   ops: MachiningOp[];
 };
 
-export type ReportHardwareLine = {
-  key: string;
-  kind: HardwareKind;
-  name: string;
-  size: Fastener | null;
-  length_mm: number | null;
-  count: number;
-  order_qty: number;
-  unit_mass_g: number;
-};
+export type ReportHardwareLine = HardwareLine;
 
 export type TNutOrder = {
   member_id: string;
@@ -157,20 +148,7 @@ export type ReportModule = {
   bears_on: { member_id: string; face: FaceName; from_mm: number; to_mm: number }[];
 };
 
-export type ReportSpan = {
-  from_mm: number;
-  to_mm: number;
-  span_mm: number;
-  support: 'simple' | 'cantilever';
-  deflection_mm: number;
-  deflection_fixed_mm: number | null;
-  limit_mm: number;
-  moment_Nmm: number;
-  moment_fixed_Nmm: number | null;
-  stress_MPa: number;
-  allowable_MPa: number;
-  utilisation: number;
-};
+export type ReportSpan = SpanCheck;
 
 export type ReportMemberCheck = {
   member_id: string;
