@@ -9,6 +9,7 @@ import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { buildClient, prepareDatabase, startServer, stopProcess, waitForHealth } from './lib/app-env';
+import { quantile } from './lib/stats';
 
 const PORT = Number(process.env.BENCH_PORT ?? 3921);
 const BASE = `http://127.0.0.1:${PORT}`;
@@ -45,8 +46,7 @@ type FrameStats = { frames: number; median: number; p95: number; worst: number; 
 
 function stats(stamps: number[]): FrameStats {
   const d = stamps.slice(1).map((t, i) => t - stamps[i]).sort((a, b) => a - b);
-  const q = (p: number) => d[Math.min(d.length - 1, Math.floor(p * d.length))] ?? NaN;
-  return { frames: d.length, median: q(0.5), p95: q(0.95), worst: d[d.length - 1] ?? NaN, over20: d.filter((x) => x > 20).length };
+  return { frames: d.length, median: quantile(d, 0.5), p95: quantile(d, 0.95), worst: d[d.length - 1] ?? NaN, over20: d.filter((x) => x > 20).length };
 }
 
 async function recordFrames(page: Page, gesture: () => Promise<void>): Promise<FrameStats> {

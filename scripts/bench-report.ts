@@ -4,6 +4,7 @@ import { availableParallelism, loadavg } from 'node:os';
 import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
 import type { FrameDocument } from '@shared/model/frame-document';
+import { quantile } from './lib/stats';
 
 const RUNS = 200;
 const WARM_UP = 20;
@@ -31,8 +32,6 @@ export function benchFrame(bays = 50): FrameDocument {
   }
   return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
 }
-
-const quantile = (sorted: number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
 
 function main(): void {
   const doc = benchFrame();
