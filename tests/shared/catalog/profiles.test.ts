@@ -2,18 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { ALLOYS } from '@shared/catalog/alloys';
 import { FASTENER_THREADS, tapDrill } from '@shared/catalog/fasteners';
 import { PROFILE_DISCLAIMER, listProfiles, resolveProfile, sectionOf } from '@shared/catalog/profiles';
-import { InputError } from '@shared/errors';
 import { bounds, sectionProblem } from '@shared/geometry/polygon';
+import { errorOf } from '../../support/input-error';
 
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof InputError) return e.field;
-    throw e;
-  }
-  throw new Error('expected an InputError');
-}
+const fieldOf = (fn: () => unknown): string => errorOf(fn).field;
 
 describe('catalogue of generic slotted profiles', () => {
   const profiles = listProfiles();

@@ -5,18 +5,9 @@ import { resolveMembers } from '@shared/engine/resolve-members';
 import { InputError } from '@shared/errors';
 import { parseFrameDocument } from '@shared/model/parse';
 import { computeReport } from '@shared/engine/report';
+import { errorOf } from '../../support/input-error';
 
 const datum = (id: string, from?: string, offset_mm = 0, axis = 'x') => ({ type: 'datum', id, axis, ...(from ? { from } : {}), offset_mm });
-
-function errorOf(fn: () => unknown): InputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error('expected an InputError');
-}
 
 describe('datums', () => {
   it('chains offsets and module sizes', () => {

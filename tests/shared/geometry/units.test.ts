@@ -1,6 +1,5 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { InputError } from '@shared/errors';
 import {
   MM_PER_INCH,
   formatLength,
@@ -11,6 +10,7 @@ import {
   parseMass,
   toFractionalInches,
 } from '@shared/geometry/units';
+import { errorOf } from '../../support/input-error';
 
 // 1 in = 25.4 mm exactly: NIST, and the US Federal Register notice of 1 July 1959 (REFERENCES.md [S]).
 // 1 ft = 12 in and 1 lb = 0.45359237 kg exactly: the same 1959 international yard and pound agreement.
@@ -18,16 +18,6 @@ import {
 const LB_KG = 0.45359237;
 const G0 = 9.80665;
 const LBF_N = LB_KG * G0;
-
-function errorOf(fn: () => unknown): InputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error('expected an InputError');
-}
 
 describe('parseLength', () => {
   it('uses exactly 25.4 mm per inch', () => {
