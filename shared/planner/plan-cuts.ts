@@ -2,6 +2,7 @@
 // reports progress and honours an AbortSignal both in a browser Web Worker and in-process on the server;
 // `planCutsSync` runs the same steps without yielding (command line, benchmarks).
 import { solveCore, type CoreProgress, type CoreResult } from './core/solver';
+import { InputError } from '../errors';
 import { validateCutJob, type CutJob } from './job';
 import { buildPlan, type CutPlan } from './plan';
 import { prepareJob } from './scale';
@@ -36,7 +37,7 @@ function start(job: CutJob, opts: PlanOptions) {
   const clock = opts.clock ?? now;
   const valid = validateCutJob(job);
   const prep = prepareJob(valid);
-  if (prep.problem.types.length === 0) throw new Error('stock: no stock bars are available (every quantity is 0)');
+  if (prep.problem.types.length === 0) throw new InputError('stock', 'stock: no stock bars are available (every quantity is 0)');
   const t0 = clock();
   const limit = Math.max(0, opts.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS);
   const gen = solveCore(prep.problem, { deadline: t0 + limit, now: clock });

@@ -4,6 +4,7 @@
 // of diving methods", INFORMS J. Computing 31 (2019) 251–267). Each node also tries residual rounding: keep the
 // integer part of the LP and pack the rest greedily (Wäscher & Gau 1996; Belov & Scheithauer 2006).
 // Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
+import { InputError } from '../../errors';
 import { martelloTothL2, materialBound } from './bounds';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
@@ -84,7 +85,9 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     const s = greedyPack(p, p.demand, qty0, fit, open);
     if (s) offer(s);
   }
-  if (inc === null) throw new Error('the stock available cannot hold every part');
+  if (inc === null) {
+    throw new InputError('stock', 'stock: the bars available cannot hold every part; add a stock length that can be bought as needed');
+  }
   const greedyCost = (inc as Incumbent).cost;
   const greedyBars = (inc as Incumbent).bars;
   const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;

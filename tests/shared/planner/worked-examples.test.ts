@@ -104,3 +104,12 @@ describe('input errors name the part', () => {
     expect(() => validateCutJob({ kerf: 500, stock: [{ length: 500 }], parts: [{ length: 100, qty: 1, label: 'A' }] })).toThrow(/kerf/);
   });
 });
+
+describe('stock that cannot hold the parts', () => {
+  it('says so, naming the stock, when only a short offcut is on hand', () => {
+    // Two 900 mm parts need 900 + 3 + 900 = 1803 mm; the only stock is one 1000 mm offcut.
+    expect(() =>
+      planCutsSync({ kerf: 3, stock: [{ length: 1000, qty: 1, price: 0 }], parts: [{ length: 900, qty: 2, label: 'P' }] }),
+    ).toThrow(/^stock: the bars available cannot hold every part/);
+  });
+});
