@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
-import { createScratchProject, deleteScratchProject, openFrameCopy, pickMember, type ScratchProject } from './editor-helpers';
+import { screenshotPath } from './support/browser';
+import { pickMember, useScratchFrame } from './editor-helpers';
 
 /** Someone else's save, made through the API behind the editor's back: the document without one cross-member. */
 async function saveBehindTheEditor(page: Page, frameId: string, baseVersion: number, document: unknown): Promise<number> {
@@ -27,23 +27,14 @@ const statusText = (page: Page) => page.locator('.frame-editor__status').innerTe
 
 describe('two people save the same frame', () => {
   let page: Page;
-  let project: ScratchProject;
   let frameId = '';
   const doc = demoFrameDocument();
   const theirs = { ...doc, members: doc.members.filter((m) => m.id !== 'galley-x0-top') };
 
-  useBrowserPage(
-    async (opened) => {
-      page = opened;
-      await signIn(page, DEMO.owner);
-      project = await createScratchProject(page, `Editor conflict test ${Date.now().toString(36)}`);
-      const path = await openFrameCopy(page, project, 'Kitchen pod, conflict test', doc);
-      frameId = path.split('/').pop() as string;
-    },
-    async (opened) => {
-      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
-    },
-  );
+  useScratchFrame('conflict', doc, (opened, path) => {
+    page = opened;
+    frameId = path.split('/').pop() as string;
+  });
 
   async function nudgeAnUpright(): Promise<void> {
     await pickMember(page, 'galley-u4-f');

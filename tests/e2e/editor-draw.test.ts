@@ -3,27 +3,18 @@ import type { Page } from 'playwright-core';
 import { computeReport, type FrameReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
-import { createScratchProject, cutListRows, deleteScratchProject, fieldValue, itemInView, openFrameCopy, toScreen, type ScratchProject } from './editor-helpers';
+import { screenshotPath } from './support/browser';
+import { cutListRows, fieldValue, itemInView, toScreen, useScratchFrame } from './editor-helpers';
 
 describe('drawing in the frame editor', () => {
   let page: Page;
-  let project: ScratchProject;
   const doc = demoFrameDocument();
   let report: FrameReport;
 
-  useBrowserPage(
-    async (opened) => {
-      page = opened;
-      report = computeReport(doc);
-      await signIn(page, DEMO.owner);
-      project = await createScratchProject(page, `Editor drawing test ${Date.now().toString(36)}`);
-      await openFrameCopy(page, project, 'Kitchen pod, drawing test', doc);
-    },
-    async (opened) => {
-      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
-    },
-  );
+  useScratchFrame('drawing', doc, (opened) => {
+    page = opened;
+    report = computeReport(doc);
+  });
 
   it('draws a rail between two uprights and lists its cut length, face to face', async () => {
     // The front uprights either side of the cooler's bay.

@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { projectBox, VIEWS, type ViewId } from '@shared/editing/views';
 import type { FrameReport } from '@shared/engine/report';
+import { DEMO, signIn, useBrowserPage } from './support/browser';
 
 // Browser-test helpers for the frame editor: a scratch project holding the test's own copies of frames (so the
 // tests never change the seeded demo frame others read), and the front view's mapping from millimetres to the
@@ -53,6 +54,24 @@ export async function openFrameCopy(page: Page, p: ScratchProject, name: string,
   // Let the canvas measure itself and fit the frame.
   await page.waitForTimeout(500);
   return path;
+}
+
+/**
+ * For a describe block: the owner signed in on a copy of `document`, opened in the editor from a scratch project
+ * of its own ("Editor <what> test ..."), deleted after the tests. `ready` receives the page and the frame's address.
+ */
+export function useScratchFrame(what: string, document: unknown, ready: (page: Page, path: string) => void): void {
+  let project: ScratchProject | undefined;
+  useBrowserPage(
+    async (page) => {
+      await signIn(page, DEMO.owner);
+      project = await createScratchProject(page, `Editor ${what} test ${Date.now().toString(36)}`);
+      ready(page, await openFrameCopy(page, project, `Kitchen pod, ${what} test`, document));
+    },
+    async (page) => {
+      if (project) await deleteScratchProject(page, project).catch(() => undefined);
+    },
+  );
 }
 
 /** Screen point (page pixels) of a point given in a view's millimetres. */

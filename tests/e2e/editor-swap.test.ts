@@ -3,29 +3,20 @@ import type { Page } from 'playwright-core';
 import { computeReport, type FrameReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { demoFrameDocument } from '@shared/model/demo-frame';
-import { DEMO, screenshotPath, signIn, useBrowserPage } from './support/browser';
-import { createScratchProject, cutListRows, deleteScratchProject, fieldValue, itemInView, openFrameCopy, pickMember, toScreen, type ScratchProject } from './editor-helpers';
+import { screenshotPath } from './support/browser';
+import { cutListRows, fieldValue, itemInView, pickMember, toScreen, useScratchFrame } from './editor-helpers';
 
 const qtyOf = (rows: string[][], length: string) => rows.filter((r) => r[2] === length).reduce((n, r) => n + Number(r[3]), 0);
 
 describe('swapping modules re-lays the frame', () => {
   let page: Page;
-  let project: ScratchProject;
   const doc = demoFrameDocument();
   let report: FrameReport;
 
-  useBrowserPage(
-    async (opened) => {
-      page = opened;
-      report = computeReport(doc);
-      await signIn(page, DEMO.owner);
-      project = await createScratchProject(page, `Editor swap test ${Date.now().toString(36)}`);
-      await openFrameCopy(page, project, 'Kitchen pod, swap test', doc);
-    },
-    async (opened) => {
-      if (project) await deleteScratchProject(opened, project).catch(() => undefined);
-    },
-  );
+  useScratchFrame('swap', doc, (opened) => {
+    page = opened;
+    report = computeReport(doc);
+  });
 
   it('moves the upright between the cooler and the tank, changes the cut list, and undo puts it all back', async () => {
     const cooler = doc.modules.find((m) => m.id === 'cooler')!;
