@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { DEMO, DEMO_PROJECT, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { DEMO, DEMO_PROJECT, newPage, screenshotPath, signIn, useBrowserPage } from './support/browser';
 
 // At the saw on a tablet: the cutter starts cutting, taps cuts done, a second person sees the ticks on reload,
 // and the last tick can be undone. A viewer sees the same bars but cannot tick.
@@ -20,14 +20,11 @@ describe('cutting at the saw', () => {
   let cutter: Page;
   let owner: Page;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    cutter = await newPage(browser);
+  useBrowserPage(async (opened, launched) => {
+    browser = launched;
+    cutter = opened;
     await cutter.setViewportSize({ width: 1180, height: 820 });
     owner = await newPage(browser);
-  });
-  afterAll(async () => {
-    await browser?.close();
   });
 
   it('the cutter starts cutting and sees the first bar in saw order', async () => {

@@ -1,7 +1,7 @@
 import { writeFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { DEMO, DEMO_PROJECT, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
+import { DEMO, DEMO_PROJECT, newPage, screenshotPath, signIn, useBrowserPage } from './support/browser';
 
 // The owner adds a supplier, plans an order for the demo frame, sends it once, and finds it in the outbox with the
 // PDF attached; the shelf takes offcuts from a CSV with a bad row listed by line.
@@ -12,13 +12,10 @@ describe('ordering from a supplier', () => {
   let browser: Browser;
   let page: Page;
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    page = await newPage(browser);
+  useBrowserPage(async (opened, launched) => {
+    page = opened;
+    browser = launched;
     await signIn(page, DEMO.owner);
-  });
-  afterAll(async () => {
-    await browser?.close();
   });
 
   it('adds a supplier with bar lengths and prices', async () => {

@@ -36,11 +36,11 @@ export async function newPage(browser: Browser): Promise<Page> {
 
 /**
  * For a describe block: launches the browser and opens a fresh page before its tests, and closes the browser after.
- * `ready` receives the open page (keep it, and sign in or open a frame there); `beforeClose` tidies up with the page
- * still open, e.g. deletes what the tests created.
+ * `ready` receives the open page (keep it, and sign in or open a frame there) and the browser for any further
+ * pages; `beforeClose` tidies up with the page still open, e.g. deletes what the tests created.
  */
 export function useBrowserPage(
-  ready: (page: Page) => void | Promise<void>,
+  ready: (page: Page, browser: Browser) => void | Promise<void>,
   beforeClose?: (page: Page) => void | Promise<void>,
 ): void {
   let browser: Browser | undefined;
@@ -48,7 +48,7 @@ export function useBrowserPage(
   beforeAll(async () => {
     browser = await launchBrowser();
     page = await newPage(browser);
-    await ready(page);
+    await ready(page, browser);
   });
   afterAll(async () => {
     if (page && beforeClose) await beforeClose(page);
