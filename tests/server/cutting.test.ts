@@ -4,7 +4,7 @@ import type { CuttingState } from '@shared/api/shop';
 import { computeReport } from '@shared/engine/report';
 import { parseFrameDocument } from '@shared/model/parse';
 import { formatLength } from '@shared/geometry/units';
-import { ACTORS, demoDocument, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, demoDocument, MEMBERS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 import { pdfText } from '../support/pdf-text';
 
 let w: ShopWorld;
@@ -25,7 +25,7 @@ const binary = (res: import('supertest').Test) =>
 describe('cutting at the saw', () => {
   it.each(ACTORS)('%s: reading the cutting state is for members', async (a) => {
     const res = await c(a).get(url());
-    expect(res.status).toBe(['owner', 'designer', 'cutter', 'viewer'].includes(a) ? 200 : refusal(a));
+    expect(res.status).toBe(MEMBERS.includes(a) ? 200 : refusal(a));
     if (res.status === 200) expect(res.body.session).toBeNull();
   });
 

@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { OrderDetail, Supplier } from '@shared/api/shop';
-import { ACTORS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, EDITORS, MEMBERS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 import { pdfText } from '../support/pdf-text';
 
 let w: ShopWorld;
@@ -9,8 +9,6 @@ useShopWorld((world) => {
   w = world;
 });
 const c = (a: Actor) => w.clients.get(a)!;
-const EDITORS: Actor[] = ['owner', 'designer'];
-const MEMBERS: Actor[] = ['owner', 'designer', 'cutter', 'viewer'];
 
 const supplierBody = {
   name: 'Northgate Metals',

@@ -15,6 +15,9 @@ import { createTestContext, truncateAll, type TestContext } from '../support/tes
 
 export type Actor = Role | 'outsider' | 'anonymous';
 export const ACTORS: Actor[] = ['owner', 'designer', 'cutter', 'viewer', 'outsider', 'anonymous'];
+/** Roles that may change suppliers, shelf stock and orders; every member may read them. */
+export const EDITORS: Actor[] = ['owner', 'designer'];
+export const MEMBERS: Actor[] = ['owner', 'designer', 'cutter', 'viewer'];
 
 export interface ShopWorld {
   ctx: TestContext;

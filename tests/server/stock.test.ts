@@ -1,14 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import type { CustomProfileView, ImportResult, Offcut } from '@shared/api/shop';
-import { ACTORS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
+import { ACTORS, EDITORS, MEMBERS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 
 let w: ShopWorld;
 useShopWorld((world) => {
   w = world;
 });
 const c = (a: Actor) => w.clients.get(a)!;
-const EDITORS: Actor[] = ['owner', 'designer'];
-const MEMBERS: Actor[] = ['owner', 'designer', 'cutter', 'viewer'];
 
 const upload = (a: Actor, path: string, text: string, name = 'stock.csv') => c(a).post(path).attach('file', Buffer.from(text, 'utf8'), { filename: name, contentType: 'text/csv' });
 
