@@ -2,16 +2,22 @@
 // heuristic that fixes one pattern at a time and regenerates columns on the residual, backtracking by limited
 // discrepancy search (Sadykov, Vanderbeck, Pessoa, Tahiri & Uchoa, "Primal heuristics for branch and price: the assets
 // of diving methods", INFORMS J. Computing 31 (2019) 251–267). Each node also tries residual rounding: keep the
-// integer part of the LP and pack the rest greedily (Wäscher & Gau 1996; Belov & Scheithauer 2006).
+// integer part of the LP and pack the rest greedily (Wäscher & Gau 1996; Belov & Scheithauer 2006). With one unpriced
+// stock length, minimum bin slack (./mbs) packs the whole list before the LP and each residual inside the dives.
 // Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
 import { InputError } from '../../errors';
 import { martelloTothL2, materialBound } from './bounds';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
+import { mbsPack } from './mbs';
 import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
 /** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
 const ROOT_SHARE = 0.7;
+/** Share of the time limit the minimum-bin-slack restarts may take when they do not reach the bound at once. */
+const MBS_SHARE = 0.05;
+/** Enumeration nodes per bar when minimum bin slack completes a dive node's residual: cheap enough to run at every node. */
+const RESIDUAL_MBS_NODES = 2000;
 /** Pricing rounds per dive node: a node needs a good LP point to guide the next fix, not a proof. */
 const NODE_ROUNDS = 30;
 /** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
@@ -115,6 +121,16 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       stats,
     };
   };
+  // One unpriced stock length: minimum bin slack often packs to the bound where first/best fit stop a bar above.
+  if (unitCost && p.types.length === 1 && best().cost > lower + improveTol) {
+    const bars = mbsPack(p.sizes, p.demand, p.types[0].capacity, {
+      target: lower,
+      deadline: t0 + (opts.deadline - t0) * MBS_SHARE,
+      now: opts.now,
+    });
+    const qty = p.types[0].qty;
+    if (qty === null || bars.length <= qty) offer(bars.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 })));
+  }
   yield { phase: 'greedy', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   if (best().cost <= lower + improveTol) return done(null, null);
 
@@ -145,6 +161,16 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       const qq = p.types.map((t, i) => (t.qty === null ? null : q[i]));
       const rest = greedyPack(p, d, qq, fit, 'on-hand-first');
       if (rest) offer(sol.concat(rest));
+    }
+    if (singleBarObjective) {
+      const rest = mbsPack(p.sizes, d, p.types[0].capacity, {
+        target: 0,
+        deadline: 0,
+        now: opts.now,
+        maxTries: 1,
+        nodeLimit: RESIDUAL_MBS_NODES,
+      });
+      offer(sol.concat(rest.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 }))));
     }
   };
 
