@@ -15,9 +15,15 @@ import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem
 /** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
 const ROOT_SHARE = 0.7;
 /** Share of the time limit the minimum-bin-slack restarts may take when they do not reach the bound at once. */
-const MBS_SHARE = 0.05;
+const MBS_SHARE = 0.01;
 /** Enumeration nodes per bar when minimum bin slack completes a dive node's residual: cheap enough to run at every node. */
 const RESIDUAL_MBS_NODES = 2000;
+/**
+ * Largest residual (in pieces) that minimum bin slack completes at a dive node. Deep in a dive the residual is small
+ * and this closes the last bar; near the root of a fractional LP (triplet lists) it is most of the list, and packing
+ * it at every node costs the dive more time than it saves.
+ */
+const RESIDUAL_MBS_MAX_PIECES = 120;
 /** Pricing rounds per dive node: a node needs a good LP point to guide the next fix, not a proof. */
 const NODE_ROUNDS = 30;
 /** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
@@ -162,7 +168,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       const rest = greedyPack(p, d, qq, fit, 'on-hand-first');
       if (rest) offer(sol.concat(rest));
     }
-    if (singleBarObjective) {
+    if (singleBarObjective && d.reduce((n, k) => n + k, 0) <= RESIDUAL_MBS_MAX_PIECES) {
       const rest = mbsPack(p.sizes, d, p.types[0].capacity, {
         target: 0,
         deadline: 0,
