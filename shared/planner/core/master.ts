@@ -98,6 +98,18 @@ export class Master {
     for (const j of this.doiColumns) this.lp.setCost(j, on ? 0 : this.bigM);
   }
 
+  /**
+   * Scale each pattern column's cost by 1 + ε·u (u uniform in [0, 1)), or restore the true costs with ε = 0. The
+   * cutting-stock LP has many optimal points; a tiny perturbation makes a restarted dive follow another one. Bounds
+   * are unaffected: they are priced with the true costs.
+   */
+  perturbCosts(eps: number, rng: () => number): void {
+    for (let j = 0; j < this.patterns.length; j++) {
+      const pt = this.patterns[j];
+      if (pt) this.lp.setCost(j, this.p.types[pt.type].cost * (1 + eps * rng()));
+    }
+  }
+
   private addAux(rows: Int32Array, vals: Float64Array, cost: number): number {
     this.patterns.push(null);
     return this.lp.addColumn({ rows, vals, cost });

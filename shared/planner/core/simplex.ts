@@ -15,6 +15,8 @@ const PIVOT_TOL = 1e-9;
 const FEAS_TOL = 1e-9;
 const DJ_TOL = 1e-9;
 const CHECK_EVERY = 64;
+/** Devex weights start again from 1 when one grows past this. */
+const DEVEX_RESET = 1e6;
 
 export class RevisedSimplex {
   readonly m: number;
@@ -29,6 +31,8 @@ export class RevisedSimplex {
   private readonly work: Float64Array;
   private readonly rowNz: Int32Array;
   private pivots = 0;
+  /** Devex reference weights, one per column. */
+  private readonly devex: number[] = [];
   iterations = 0;
 
   constructor(m: number) {
@@ -102,24 +106,36 @@ export class RevisedSimplex {
     return d;
   }
 
-  /** Primal simplex from a primal-feasible basis. */
+  /**
+   * Primal simplex from a primal-feasible basis, with Devex pricing (Forrest & Goldfarb, "Steepest-edge simplex
+   * algorithms for linear programming", Mathematical Programming 57 (1992) 341–374, after Harris 1973): the entering
+   * column maximises d_j² / w_j, where w_j approximates the squared length of its edge. On the degenerate cutting-stock
+   * master it takes far fewer pivots than the most negative reduced cost.
+   */
   primal(maxIter: number, stop?: () => boolean): LpStatus {
     const n0 = this.iterations;
+    const { m, binv } = this;
     let stall = 0;
     let lastObj = Infinity;
     this.computeDuals();
+    while (this.devex.length < this.cols.length) this.devex.push(1);
+    const w = this.devex;
     while (this.iterations - n0 < maxIter) {
       if (stop && (this.iterations - n0) % 128 === 127 && stop()) return 'iteration-limit';
-      // Dantzig pricing; after a long run without progress fall back to the lowest index (Bland) to break cycling.
+      // After a long run without progress fall back to the lowest index (Bland) to break cycling.
       const bland = stall > 50;
       let enter = -1;
-      let best = -DJ_TOL;
+      let best = 0;
+      let dq = 0;
       for (let j = 0; j < this.cols.length; j++) {
         if (this.pos[j] >= 0) continue;
         const d = this.reducedCost(j);
-        if (d < best) {
-          best = d;
+        if (d >= -DJ_TOL) continue;
+        const score = (d * d) / w[j];
+        if (score > best) {
+          best = score;
           enter = j;
+          dq = d;
           if (bland) break;
         }
       }
@@ -127,7 +143,28 @@ export class RevisedSimplex {
       const alpha = this.ftran(enter);
       const r = this.ratioTest(alpha, bland);
       if (r < 0) return 'optimal'; // unbounded direction cannot occur with non-negative costs; treat as done
-      this.pivot(r, enter, alpha, best);
+      // Devex weights along the pivot row (row r of the old inverse times each column).
+      const ar = alpha[r];
+      const wq = w[enter];
+      const off = r * m;
+      let reset = false;
+      for (let j = 0; j < this.cols.length; j++) {
+        if (this.pos[j] >= 0 || j === enter) continue;
+        const col = this.cols[j];
+        let a = 0;
+        for (let t = 0; t < col.rows.length; t++) a += binv[off + col.rows[t]] * col.vals[t];
+        if (a === 0) continue;
+        const ratio = a / ar;
+        const cand = ratio * ratio * wq;
+        if (cand > w[j]) {
+          w[j] = cand;
+          if (cand > DEVEX_RESET) reset = true;
+        }
+      }
+      const leaving = this.heads[r];
+      w[leaving] = Math.max(wq / (ar * ar), 1);
+      if (reset) w.fill(1);
+      this.pivot(r, enter, alpha, dq);
       const obj = this.objective();
       if (obj < lastObj - 1e-12) {
         stall = 0;

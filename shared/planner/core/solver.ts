@@ -3,13 +3,16 @@
 // discrepancy search (Sadykov, Vanderbeck, Pessoa, Tahiri & Uchoa, "Primal heuristics for branch and price: the assets
 // of diving methods", INFORMS J. Computing 31 (2019) 251–267). Each node also tries residual rounding: keep the
 // integer part of the LP and pack the rest greedily (Wäscher & Gau 1996; Belov & Scheithauer 2006). With one unpriced
-// stock length, minimum bin slack (./mbs) packs the whole list before the LP and each residual inside the dives.
+// stock length, minimum bin slack (./mbs) packs the whole list before the LP and each residual inside the dives, and
+// repacking a few bars at a time (./repack) runs before the LP and between dives. Restarted dives perturb the LP's
+// costs slightly so that they follow other optimal LP points.
 // Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
 import { InputError } from '../../errors';
 import { martelloTothL2, materialBound } from './bounds';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
 import { mbsPack } from './mbs';
+import { Repacker } from './repack';
 import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
 /** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
@@ -26,6 +29,22 @@ const RESIDUAL_MBS_NODES = 2000;
 const RESIDUAL_MBS_MAX_PIECES = 120;
 /** Pricing rounds per dive node: a node needs a good LP point to guide the next fix, not a proof. */
 const NODE_ROUNDS = 30;
+/**
+ * Share of the time limit that repacking (./repack) may take before the LP, and after each dive. Before the LP it
+ * stops early when it has neither removed a bar nor lightened the emptiest one for a while (REPACK_STALL_SHARE of the
+ * limit, at most REPACK_STALL_MS_PER_PART per part): some lists need the LP's guidance or proof, others (three parts
+ * to a bar, hundreds of parts) repacking shortens sooner.
+ */
+const REPACK_FIRST_SHARE = 0.3;
+const REPACK_STALL_SHARE = 0.05;
+const REPACK_STALL_MS_PER_PART = 0.25;
+const REPACK_ROUND_SHARE = 0.05;
+/** The emptiest bar's load must fall to this fraction of its last mark to count as progress. */
+const REPACK_DRAIN = 0.7;
+/** Longest repacking stretch between two progress reports, in ms. */
+const REPACK_SLICE_MS = 20;
+/** Relative perturbation of the pattern costs on restarts (the LP then settles on another of its optimal points). */
+const PERTURB = 1e-4;
 /** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
 const RESTART_NOISE = 1e6;
 
@@ -127,6 +146,15 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       stats,
     };
   };
+  // One unpriced stock length: repacking a few bars at a time often removes the last bar above the bound long
+  // before the LP would (lists of exactly filled bars, long bars with few parts each). It starts from the first/best
+  // fit packing: the minimum-bin-slack one below has its free room all in its last bars, which repacking drains worse.
+  const repacker = singleBarObjective ? new Repacker(p.sizes, p.types[0].capacity) : null;
+  let repackerBars = Infinity;
+  if (repacker) {
+    repacker.reset(barsOf(best().sol));
+    repackerBars = repacker.barCount;
+  }
   // One unpriced stock length: minimum bin slack often packs to the bound where first/best fit stop a bar above.
   if (unitCost && p.types.length === 1 && best().cost > lower + improveTol) {
     const bars = mbsPack(p.sizes, p.demand, p.types[0].capacity, {
@@ -137,7 +165,31 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     const qty = p.types[0].qty;
     if (qty === null || bars.length <= qty) offer(bars.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 })));
   }
+  /** Repack until `until`; after a dive, first catch up with a better packing the dive found. */
+  function* repack(until: number, afterDive: boolean, stallMs = Infinity): Generator<CoreProgress, void, void> {
+    if (!repacker) return;
+    if (afterDive && best().bars < repackerBars) repacker.reset(barsOf(best().sol));
+    // Progress: a bar fewer, or an emptiest bar markedly lighter (the next bar is being drained).
+    let gained = opts.now();
+    let lowest = repacker.lowestLoad;
+    while (best().cost > lower + improveTol && opts.now() < Math.min(until, opts.deadline, gained + stallMs)) {
+      const found = repacker.run(best().bars - 1, Math.min(until, opts.now() + REPACK_SLICE_MS), opts.now);
+      if (found) offer(repacker.bars().map((counts) => ({ pattern: { type: 0, counts }, mult: 1 })));
+      // Once it beats the best packing it has shown it suits the list: no more stall limit in this call.
+      if (found) stallMs = Infinity;
+      if (repacker.barCount < repackerBars || repacker.lowestLoad <= lowest * REPACK_DRAIN) {
+        gained = opts.now();
+        lowest = repacker.lowestLoad;
+      }
+      repackerBars = repacker.barCount;
+      yield { phase: 'improve', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+    }
+  }
   yield { phase: 'greedy', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+  if (best().cost <= lower + improveTol) return done(null, null);
+  const parts = p.demand.reduce((a, b) => a + b, 0);
+  const stallMs = Math.min((opts.deadline - t0) * REPACK_STALL_SHARE, parts * REPACK_STALL_MS_PER_PART);
+  yield* repack(t0 + (opts.deadline - t0) * REPACK_FIRST_SHARE, false, stallMs);
   if (best().cost <= lower + improveTol) return done(null, null);
 
   const master = new Master(p);
@@ -276,11 +328,23 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   for (let round = 0; !closed(); round++) {
     noise = round < 2 ? 0 : RESTART_NOISE;
     master.useDualInequalities(round % 2 === 0);
+    if (round >= 2) master.perturbCosts(PERTURB, rng);
+    const diveStart = opts.now();
     yield* dive([], 0, Int32Array.from(p.demand), Int32Array.from(p.types, (t) => t.qty ?? 0), new Set(), 0, 1);
     if (round === 0 && exhausted) break;
+    // Repacking gets as long as the dive took (short dives on short lists, which the dives solve best).
+    const diveTime = opts.now() - diveStart;
+    if (!closed()) yield* repack(opts.now() + Math.min(diveTime, (opts.deadline - t0) * REPACK_ROUND_SHARE), true);
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);
+}
+
+/** One entry per bar (counts over the sizes). */
+function barsOf(sol: readonly PatternUse[]): Int32Array[] {
+  const bars: Int32Array[] = [];
+  for (const u of sol) for (let c = 0; c < u.mult; c++) bars.push(u.pattern.counts);
+  return bars;
 }
 
 /** Load of a pattern counting only items still demanded. */

@@ -78,3 +78,31 @@ export function exactBars(lengths: number[], usable: number, kerf: number): numb
   rec(0);
   return best;
 }
+
+/** Group a list of item sizes into strictly decreasing distinct sizes with counts, as the solver core takes them. */
+export function groupSizes(items: number[]): { sizes: number[]; demand: number[] } {
+  const m = new Map<number, number>();
+  for (const x of items) m.set(x, (m.get(x) ?? 0) + 1);
+  const sizes = [...m.keys()].sort((a, b) => b - a);
+  return { sizes, demand: sizes.map((s) => m.get(s)!) };
+}
+
+/** Problems with a packing of the core (bars as counts over sizes): a part placed too often or too rarely, an over-filled or empty bar. */
+export function packingErrors(bars: ArrayLike<number>[], sizes: number[], demand: number[], cap: number): string[] {
+  const errs: string[] = [];
+  const placed = new Array<number>(sizes.length).fill(0);
+  bars.forEach((bar, b) => {
+    let load = 0;
+    for (let i = 0; i < sizes.length; i++) {
+      if (bar[i] < 0) errs.push(`bar ${b}: negative count of size ${sizes[i]}`);
+      load += bar[i] * sizes[i];
+      placed[i] += bar[i];
+    }
+    if (load <= 0) errs.push(`bar ${b}: empty`);
+    if (load > cap) errs.push(`bar ${b}: load ${load} over capacity ${cap}`);
+  });
+  sizes.forEach((s, i) => {
+    if (placed[i] !== demand[i]) errs.push(`size ${s}: placed ${placed[i]} times, wanted ${demand[i]}`);
+  });
+  return errs;
+}

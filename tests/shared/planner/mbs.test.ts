@@ -2,14 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { mbsPack } from '../../../shared/planner/core/mbs';
 import { planCutsSync } from '../../../shared/planner/index';
+import { groupSizes, packingErrors } from './helpers';
 
-/** Group a list of item sizes into strictly decreasing distinct sizes with counts, as the core takes them. */
-function group(items: number[]): { sizes: number[]; demand: number[] } {
-  const m = new Map<number, number>();
-  for (const x of items) m.set(x, (m.get(x) ?? 0) + 1);
-  const sizes = [...m.keys()].sort((a, b) => b - a);
-  return { sizes, demand: sizes.map((s) => m.get(s)!) };
-}
 
 const once = { target: 0, deadline: 0, now: () => 1, maxTries: 1 };
 
@@ -22,21 +16,10 @@ describe('minimum bin slack packing', () => {
         fc.integer({ min: 1, max: 6 }),
         (cap, fractions, tries) => {
           const items = fractions.map((f) => 1 + Math.floor(f * (cap - 1)));
-          const { sizes, demand } = group(items);
+          const { sizes, demand } = groupSizes(items);
           let clock = 0;
           const bars = mbsPack(sizes, demand, cap, { target: 0, deadline: tries, now: () => clock++, maxTries: tries });
-          const placed = new Array<number>(sizes.length).fill(0);
-          for (const bar of bars) {
-            let load = 0;
-            for (let i = 0; i < sizes.length; i++) {
-              expect(bar[i]).toBeGreaterThanOrEqual(0);
-              load += bar[i] * sizes[i];
-              placed[i] += bar[i];
-            }
-            expect(load).toBeGreaterThan(0);
-            expect(load).toBeLessThanOrEqual(cap);
-          }
-          expect(placed).toEqual(demand);
+          expect(packingErrors(bars, sizes, demand, cap)).toEqual([]);
         },
       ),
       { numRuns: 300 },
@@ -79,6 +62,6 @@ describe('minimum bin slack packing', () => {
 });
 
 function args(items: number[]): [number[], number[]] {
-  const { sizes, demand } = group(items);
+  const { sizes, demand } = groupSizes(items);
   return [sizes, demand];
 }
