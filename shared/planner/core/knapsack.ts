@@ -105,9 +105,16 @@ function pareto(
     nodePrev[nodes] = prev;
     return nodes++;
   };
-  let W = [0];
-  let V = [0];
-  let N = [-1];
+  // Two layers of states in typed buffers (weight, value, trace node), swapped after each piece.
+  let size = 1024;
+  let W = new Float64Array(size);
+  let V = new Float64Array(size);
+  let N = new Int32Array(size);
+  let W2 = new Float64Array(size);
+  let V2 = new Float64Array(size);
+  let N2 = new Int32Array(size);
+  let L = 1;
+  N[0] = -1;
   // A greedy fill in the same order gives an incumbent value, so the completion bound prunes from the first piece.
   let greedy = 0;
   const greedyCounts = new Int32Array(n);
@@ -128,44 +135,64 @@ function pareto(
     const q = order[t];
     const aw = pw[q];
     const av = pv[q];
-    const W2: number[] = [];
-    const V2: number[] = [];
-    const N2: number[] = [];
     const eff = effFrom[t + 1];
-    const keep = (ww: number, vv: number, nn: number): void => {
-      // Dominated by the last kept state, or unable to beat the best even when filled at the best rate left.
-      if (V2.length && vv <= V2[V2.length - 1] + 1e-12) return;
-      const floor = Math.max(best, greedy);
-      if (vv + (cap - ww) * eff <= floor + 1e-10 && vv < floor) return;
-      W2.push(ww);
-      V2.push(vv);
-      N2.push(nn);
-    };
+    if (2 * L > size) {
+      size = 4 * L;
+      W2 = new Float64Array(size);
+      V2 = new Float64Array(size);
+      N2 = new Int32Array(size);
+    }
+    let L2 = 0;
     let a = 0;
     let b = 0;
-    const L = W.length;
     while (a < L || b < L) {
       const bw = b < L ? W[b] + aw : Infinity;
-      if (b < L && bw > cap) b = L;
+      if (b < L && bw > cap) b = L; // the layer is sorted by weight: no later state fits either
+      if (a >= L && b >= L) break;
       const useA = a < L && (b >= L || W[a] <= W[b] + aw);
+      let ww: number;
+      let vv: number;
+      let nn: number;
       if (useA) {
-        keep(W[a], V[a], N[a]);
+        ww = W[a];
+        vv = V[a];
+        nn = N[a];
         a++;
       } else {
-        const nv = V[b] + av;
-        const node = push(q, N[b]);
-        if (nv > best) {
-          best = nv;
-          bestNode = node;
-        }
-        keep(W[b] + aw, nv, node);
+        ww = W[b] + aw;
+        vv = V[b] + av;
+        nn = -2 - b; // trace node made only if the state is kept or is the best
         b++;
       }
+      // Dominated by the last kept state, or unable to beat the best even when filled at the best rate left.
+      const isBest = nn <= -2 && vv > best;
+      if (!isBest) {
+        if (L2 > 0 && vv <= V2[L2 - 1] + 1e-12) continue;
+        const floor = Math.max(best, greedy);
+        if (vv + (cap - ww) * eff <= floor + 1e-10 && vv < floor) continue;
+      }
+      if (nn <= -2) nn = push(q, N[-2 - nn]);
+      if (isBest) {
+        best = vv;
+        bestNode = nn;
+        if (L2 > 0 && vv <= V2[L2 - 1] + 1e-12) continue;
+      }
+      W2[L2] = ww;
+      V2[L2] = vv;
+      N2[L2] = nn;
+      L2++;
     }
-    W = W2;
-    V = V2;
-    N = N2;
-    work += W.length;
+    [W, W2] = [W2, W];
+    [V, V2] = [V2, V];
+    [N, N2] = [N2, N];
+    if (W2.length < W.length) {
+      // Keep both layers the same size after a swap following growth.
+      W2 = new Float64Array(W.length);
+      V2 = new Float64Array(W.length);
+      N2 = new Int32Array(W.length);
+    }
+    L = L2;
+    work += L;
     if (work > PARETO_STATES) return null;
   }
   const trace = (last: number): Int32Array => {
@@ -174,7 +201,7 @@ function pareto(
     return c;
   };
   // The surviving states are feasible patterns too: the next best few are cheap extra columns.
-  const others = N.map((node, k) => ({ node, value: V[k] }))
+  const others = Array.from(N.subarray(0, L), (node, k) => ({ node, value: V[k] }))
     .filter((x) => x.node !== bestNode && x.node >= 0)
     .sort((a, b) => b.value - a.value)
     .slice(0, 6)

@@ -44,6 +44,33 @@ describe('pricing knapsack', () => {
       { numRuns: 300, seed: 3 },
     );
   });
+  it('matches exhaustive search at large capacity with many items, one of each', () => {
+    // Long lists of distinct lengths on long bars (the case the pruned state list serves); at most one of each keeps
+    // the exhaustive check small.
+    const many = fc.array(fc.record({ w: fc.integer({ min: 10_000, max: 50_000 }), v: fc.double({ min: 0.05, max: 1, noNaN: true }) }), {
+      minLength: 8,
+      maxLength: 16,
+    });
+    fc.assert(
+      fc.property(many, fc.integer({ min: 100_000, max: 150_000 }), (items, cap) => {
+        const w = items.map((i) => i.w);
+        const v = items.map((i) => i.v);
+        const u = items.map(() => 1);
+        const r = solveKnapsack(w, v, u, cap);
+        expect(r.value).toBeCloseTo(brute(w, v, u, cap), 9);
+        let load = 0;
+        let val = 0;
+        r.counts.forEach((c, i) => {
+          expect(c).toBeLessThanOrEqual(1);
+          load += c * w[i];
+          val += c * v[i];
+        });
+        expect(load).toBeLessThanOrEqual(cap);
+        expect(val).toBeCloseTo(r.value, 9);
+      }),
+      { numRuns: 300, seed: 5 },
+    );
+  });
   it('matches exhaustive search at large capacity (no table over the capacity)', () => {
     fc.assert(
       fc.property(inst, fc.integer({ min: 200_000, max: 900_000 }), (items, cap) => {
