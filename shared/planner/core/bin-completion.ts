@@ -23,7 +23,7 @@ export function packIntoBars(
   const cur = new Int32Array(n);
   let nodes = 0;
 
-  // Completions of one bar: every subset of the parts left (from index k on) with load in [minLoad, room].
+  // Completions of one bar: every subset of the parts left (from index k on) with load in [minFill, room].
   const complete = (k: number, room: number, minFill: number, load: number, found: Int32Array[]): void => {
     if (load >= minFill) found.push(Int32Array.from(cur));
     if (found.length > MAX_COMPLETIONS || ++nodes > nodeLimit) return;

@@ -106,13 +106,12 @@ function pareto(
     return nodes++;
   };
   // Two layers of states in typed buffers (weight, value, trace node), swapped after each piece.
-  let size = 1024;
-  let W = new Float64Array(size);
-  let V = new Float64Array(size);
-  let N = new Int32Array(size);
-  let W2 = new Float64Array(size);
-  let V2 = new Float64Array(size);
-  let N2 = new Int32Array(size);
+  let W = new Float64Array(1024);
+  let V = new Float64Array(1024);
+  let N = new Int32Array(1024);
+  let W2 = new Float64Array(1024);
+  let V2 = new Float64Array(1024);
+  let N2 = new Int32Array(1024);
   let L = 1;
   N[0] = -1;
   // A greedy fill in the same order gives an incumbent value, so the completion bound prunes from the first piece.
@@ -136,11 +135,11 @@ function pareto(
     const aw = pw[q];
     const av = pv[q];
     const eff = effFrom[t + 1];
-    if (2 * L > size) {
-      size = 4 * L;
-      W2 = new Float64Array(size);
-      V2 = new Float64Array(size);
-      N2 = new Int32Array(size);
+    if (W2.length < 2 * L) {
+      // The next layer holds at most every state with and without this piece.
+      W2 = new Float64Array(4 * L);
+      V2 = new Float64Array(4 * L);
+      N2 = new Int32Array(4 * L);
     }
     let L2 = 0;
     let a = 0;
@@ -185,12 +184,6 @@ function pareto(
     [W, W2] = [W2, W];
     [V, V2] = [V2, V];
     [N, N2] = [N2, N];
-    if (W2.length < W.length) {
-      // Keep both layers the same size after a swap following growth.
-      W2 = new Float64Array(W.length);
-      V2 = new Float64Array(W.length);
-      N2 = new Int32Array(W.length);
-    }
     L = L2;
     work += L;
     if (work > PARETO_STATES) return null;

@@ -107,10 +107,10 @@ export class RevisedSimplex {
   }
 
   /**
-   * Primal simplex from a primal-feasible basis, with Devex pricing (Forrest & Goldfarb, "Steepest-edge simplex
-   * algorithms for linear programming", Mathematical Programming 57 (1992) 341–374, after Harris 1973): the entering
-   * column maximises d_j² / w_j, where w_j approximates the squared length of its edge. On the degenerate cutting-stock
-   * master it takes far fewer pivots than the most negative reduced cost.
+   * Primal simplex from a primal-feasible basis, with Devex pricing (Harris, "Pivot selection methods of the Devex
+   * LP code", Mathematical Programming 5 (1973) 1–28): the entering column maximises d_j² / w_j, where w_j
+   * approximates the squared length of its edge. On the degenerate cutting-stock master it took about a third fewer
+   * pivots than the most negative reduced cost on the hard lists we measured.
    */
   primal(maxIter: number, stop?: () => boolean): LpStatus {
     const n0 = this.iterations;
