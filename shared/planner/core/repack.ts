@@ -18,8 +18,8 @@ const MAX_PARTS = 48;
 /** Search nodes when the chosen bars have room enough to lose one: an exhaustive try (./bin-completion). */
 const EXACT_NODES = 20000;
 /**
- * Gathering moves: taken at these odds once at most GATHER_OPEN bars have free room, over up to GATHER_BARS bars and
- * GATHER_PARTS parts (tuned on exactly filled lists of 500 parts, three to a bar).
+ * Gathering moves: taken at these odds once at most GATHER_OPEN bars besides the emptiest have free room, over up to
+ * GATHER_BARS bars and GATHER_PARTS parts (tuned on exactly filled lists of 500 parts, three to a bar).
  */
 const GATHER_OPEN = 8;
 const GATHER_ODDS = 0.6;
