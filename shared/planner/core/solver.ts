@@ -163,7 +163,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       now: opts.now,
     });
     const qty = p.types[0].qty;
-    if (qty === null || bars.length <= qty) offer(bars.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 })));
+    if (qty === null || bars.length <= qty) offer(onFirstStock(bars));
   }
   /** Repack until `until`; after a dive, first catch up with a better packing the dive found. */
   function* repack(until: number, afterDive: boolean, stallMs = Infinity): Generator<CoreProgress, void, void> {
@@ -174,7 +174,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     let lowest = repacker.lowestLoad;
     while (best().cost > lower + improveTol && opts.now() < Math.min(until, opts.deadline, gained + stallMs)) {
       const found = repacker.run(best().bars - 1, Math.min(until, opts.now() + REPACK_SLICE_MS), opts.now);
-      if (found) offer(repacker.bars().map((counts) => ({ pattern: { type: 0, counts }, mult: 1 })));
+      if (found) offer(onFirstStock(repacker.bars()));
       // Once it beats the best packing it has shown it suits the list: no more stall limit in this call.
       if (found) stallMs = Infinity;
       if (repacker.barCount < repackerBars || repacker.lowestLoad <= lowest * REPACK_DRAIN) {
@@ -228,7 +228,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
         maxTries: 1,
         nodeLimit: RESIDUAL_MBS_NODES,
       });
-      offer(sol.concat(rest.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 }))));
+      offer(sol.concat(onFirstStock(rest)));
     }
   };
 
@@ -338,6 +338,11 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);
+}
+
+/** Bars given as counts over the sizes, as a solution on the (only) stock type 0. */
+function onFirstStock(bars: readonly Int32Array[]): PatternUse[] {
+  return bars.map((counts) => ({ pattern: { type: 0, counts }, mult: 1 }));
 }
 
 /** One entry per bar (counts over the sizes). */
