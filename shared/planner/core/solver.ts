@@ -9,6 +9,7 @@
 // Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
 import { InputError } from '../../errors';
 import { martelloTothL2, materialBound } from './bounds';
+import { coveringCost } from './covering-bound';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
 import { mbsPack } from './mbs';
@@ -393,26 +394,16 @@ function take(p: Problem, pt: Pattern, demand: Int32Array, qty: Int32Array): Pat
 }
 
 /**
- * Bounds that need no LP. Bars objective: L2 on the longest stock (any bar holds no more than it). Cost objective:
- * the fractional material bound — fill the cheapest capacity per unit first, stock on hand within its quantity.
+ * Bounds that need no LP. Bars objective: L2 on the longest stock (any bar holds no more than it). Cost objective: the
+ * least cost of whole bars whose capacities add up to the parts' total (./covering-bound).
  */
 export function combinatorialBound(p: Problem): number {
   const unitCost = p.types.every((t) => t.cost === 1) && p.costUnit === 1;
-  const singleBarObjective = unitCost && p.types.length === 1 && p.types[0].qty === null;
   const cmax = Math.max(...p.types.map((t) => t.capacity));
   if (unitCost) return martelloTothL2(p.sizes, p.demand, cmax);
   let need = 0;
   for (let i = 0; i < p.sizes.length; i++) need += p.sizes[i] * p.demand[i];
-  const byRate = p.types
-    .map((t) => ({ rate: t.cost / t.capacity, cap: t.qty === null ? Infinity : t.qty * t.capacity }))
-    .sort((a, b) => a.rate - b.rate);
-  let cost = 0;
-  for (const t of byRate) {
-    if (need <= 0) break;
-    const use = Math.min(need, t.cap);
-    cost += use * t.rate;
-    need -= use;
-  }
+  const cost = coveringCost(p.types, need);
   const tol = 1e-6 * Math.max(1, cost);
   return p.costUnit > 0 ? p.costUnit * Math.ceil((cost - tol) / p.costUnit) : cost - tol;
 }
