@@ -73,7 +73,7 @@ export interface CoreResult {
   optimal: boolean;
   /** Certified lower bound on the number of bars (same as lowerBound when every bar costs 1). */
   barLowerBound: number;
-  /** The best linear-programming bound computed, if any (unrounded). */
+  /** The LP relaxation's optimum (unrounded) when the root LP finished; null when it did not run or did not finish. */
   lpBound: number | null;
   stats: { nodes: number; lpIterations: number; pricings: number; greedyCost: number; greedyBars: number };
 }
@@ -199,7 +199,8 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   const rootDeadline = t0 + (opts.deadline - t0) * ROOT_SHARE;
   const root = master.solve({ deadline: rootDeadline, now: opts.now, stopAt: best().cost - improveTol });
   lower = Math.max(lower, master.rounded(root.lowerBound));
-  const lpBound = root.lowerBound;
+  // An unfinished root LP's value is no bound (its certified part is already in `lower`).
+  const lpBound = root.converged ? root.lowerBound : null;
   yield { phase: 'bound', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   const closed = (): boolean => best().cost <= lower + improveTol || opts.now() > opts.deadline;
 
