@@ -18,7 +18,13 @@ import { mbsPack } from './mbs';
 import { Repacker } from './repack';
 import { roundUpBound, solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
-/** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
+/**
+ * The schedule's time scale (ms): every stage's budget is a share of this, not of the time limit, so a run with a
+ * longer limit repeats a shorter run step for step and only goes on after it; its plan is never worse. The shares
+ * were tuned at the product's default limit of 2 s.
+ */
+const SCHEDULE_MS = 2000;
+/** Share of the schedule the root LP may take before diving starts (dives keep generating columns). */
 const ROOT_SHARE = 0.7;
 /** Share of the time limit the minimum-bin-slack restarts may take when they do not reach the bound at once. */
 const MBS_SHARE = 0.01;
@@ -187,7 +193,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   if (unitCost && p.types.length === 1 && best().cost > lower + improveTol) {
     const bars = mbsPack(p.sizes, p.demand, p.types[0].capacity, {
       target: lower,
-      deadline: t0 + (opts.deadline - t0) * MBS_SHARE,
+      deadline: t0 + SCHEDULE_MS * MBS_SHARE,
       now: opts.now,
     });
     const qty = p.types[0].qty;
@@ -240,14 +246,14 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       if (out.proven === 1 || lexOptimal(best()) || opts.now() > opts.deadline) return done(null, null);
     }
   }
-  const stallMs = Math.min((opts.deadline - t0) * REPACK_STALL_SHARE, parts * REPACK_STALL_MS_PER_PART);
-  yield* repack(t0 + (opts.deadline - t0) * REPACK_FIRST_SHARE, false, stallMs);
+  const stallMs = Math.min(SCHEDULE_MS * REPACK_STALL_SHARE, parts * REPACK_STALL_MS_PER_PART);
+  yield* repack(t0 + SCHEDULE_MS * REPACK_FIRST_SHARE, false, stallMs);
   if (best().cost <= lower + improveTol) return done(null, null);
 
   const master = new Master(p);
   for (const u of best().sol) master.addPattern(u.pattern);
   // The root may not converge on hard instances; leave most of the time to the dives, which keep generating columns.
-  const rootDeadline = t0 + (opts.deadline - t0) * ROOT_SHARE;
+  const rootDeadline = t0 + SCHEDULE_MS * ROOT_SHARE;
   const root = master.solve({ deadline: rootDeadline, now: opts.now, stopAt: best().cost - improveTol });
   lower = Math.max(lower, master.rounded(root.lowerBound));
   // An unfinished root LP's value is no bound (its certified part is already in `lower`).
@@ -387,7 +393,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     if (round === 0 && exhausted) break;
     // Repacking gets as long as the dive took (short dives on short lists, which the dives solve best).
     const diveTime = opts.now() - diveStart;
-    if (!closed()) yield* repack(opts.now() + Math.min(diveTime, (opts.deadline - t0) * REPACK_ROUND_SHARE), true);
+    if (!closed()) yield* repack(opts.now() + Math.min(diveTime, SCHEDULE_MS * REPACK_ROUND_SHARE), true);
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);
