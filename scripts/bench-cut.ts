@@ -1,4 +1,4 @@
-// `npm run bench:cut [-- --quick] [--random] [--priced] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
+// `npm run bench:cut [-- --quick] [--random] [--priced] [--no-mip] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
 // Runs the stock planner on the classic one-dimensional bin-packing benchmark in ../shared/bench/bpp (read in place;
 // its licence forbids copies; BPP_DIR points elsewhere) and prints, per set: instances at the known optimum, gaps,
 // times, and the same for plain first fit decreasing. `--random` adds generated split lists (optimum known by
@@ -13,12 +13,13 @@ import { runInstance, type InstanceResult } from './bench-cut/run-instance';
 import { summarise, formatSummary } from './bench-cut/summary';
 
 function parseArgs(argv: string[]) {
-  const out = { quick: false, random: false, priced: false, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
+  const out = { quick: false, random: false, priced: false, mip: true, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     if (a === '--quick') out.quick = true;
     else if (a === '--random') out.random = true;
     else if (a === '--priced') out.priced = true;
+    else if (a === '--no-mip') out.mip = false;
     else if (a === '--time-limit') out.timeLimitMs = Number(argv[++i]);
     else if (a === '--set') out.sets.push(argv[++i]);
     else if (a === '--out') out.file = argv[++i];
@@ -38,7 +39,7 @@ function parseArgs(argv: string[]) {
 const args = parseArgs(process.argv.slice(2));
 // The product's planners get HiGHS for the exact model on small jobs with several stock types; so does the benchmark.
 const highs = await highsLoader();
-useMipSolver(highs.solve as unknown as MipSolver);
+if (args.mip) useMipSolver(highs.solve as unknown as MipSolver);
 let generatedOk = true;
 if (args.random) {
   console.log(`split lists, time limit ${args.timeLimitMs} ms each, CPU clock`);

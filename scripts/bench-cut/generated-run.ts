@@ -83,7 +83,7 @@ export function runPriced(highs: Highs, timeLimitMs: number): boolean {
       rows.push({
         name: j.name,
         hit,
-        gap: (plan.cost - ref.cost) / ref.cost,
+        gap: ref.cost > 0 ? (plan.cost - ref.cost) / ref.cost : plan.cost > 0 ? 1 : 0,
         ms,
         optimal: plan.optimal,
         note: `cost ${plan.cost} (${plan.barCount} bars), exact ${ref.cost} (${ref.bars} bars${ref.proven ? '' : ', unproven'}), ${pieces} pieces, ${ms.toFixed(0)} ms`,
