@@ -204,5 +204,5 @@ export type PrincipalAxes = {
 export function principalAxes(Ix: number, Iy: number, Ixy: number): PrincipalAxes {
   const mean = (Ix + Iy) / 2;
   const rad = Math.hypot((Ix - Iy) / 2, Ixy);
-  return { I1: mean + rad, I2: mean - rad, theta: 0.5 * Math.atan2(-2 * Ixy, Ix - Iy) };
+  return { I1: mean + rad, I2: mean - rad, theta: 0.5 * Math.atan2(-2 * Ixy, Ix - Iy) + 0 };
 }
