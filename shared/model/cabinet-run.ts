@@ -5,7 +5,7 @@ import type { DatumInput } from './datum';
 import { CURRENT_SCHEMA_VERSION, frameDocumentSchema, type FrameDocument, type FrameDocumentInput } from './frame-document';
 import { idSchema, nameSchema } from './ids';
 import type { MemberInput } from './member';
-import { bearingSchema, MAX_OPTIONS, moduleKindSchema, moduleOptionSchema, type ModuleInput } from './module';
+import { bearingSchema, DEFAULT_SIDE_GAP_MM, MAX_OPTIONS, moduleKindSchema, moduleOptionSchema, type ModuleInput } from './module';
 import type { PositionInput } from './position';
 import { fieldPath } from './references';
 import { MAX_STACK } from './run';
@@ -218,6 +218,8 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
         ...(m.litres !== undefined ? { litres: m.litres } : {}),
         ...(m.options ? { options: m.options } : {}),
         bearing: m.bearing,
+        // Slides span the clearance; a wider one than slides usually take is still the way this module bears.
+        ...(m.bearing === 'side-rails' && clearance > DEFAULT_SIDE_GAP_MM ? { sideGap_mm: clearance } : {}),
         place: { y: inFront, z },
       });
     });
