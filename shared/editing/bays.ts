@@ -61,7 +61,7 @@ const refersToBay = (m: Member, bayId: string) => datumsOfMember(m).some((d) => 
 const atBoundary = (m: Member, run: Run, k: number) => datumsOfMember(m).includes(`${run.id}.u${k}`);
 
 /** A bay's rails: members along the run from its start to its end that carry no module of their own. */
-function spanningRails(doc: FrameDocument, run: Run, bay: Bay): Member[] {
+export function spanningRails(doc: FrameDocument, run: Run, bay: Bay): Member[] {
   const own = new Set(bayModuleIds(bay).flatMap(moduleDatumIds));
   return doc.members.filter(
     (m) =>

@@ -185,3 +185,46 @@ describe('swapping modules', () => {
     for (const r of reasons) expectPlainWords(r, doc);
   });
 });
+
+describe('adding a module to a run', () => {
+  it('into a new bay at the end: uprights, rails and bearers appear, and it bears on its bearers', async () => {
+    const { addModuleToRun } = await import('@shared/editing/fit-module');
+    const { MODULE_LIBRARY } = await import('@shared/editing/module-library');
+    const doc = coolerAndOpenBay();
+    const r0 = computeReport(doc);
+    const fridge = MODULE_LIBRARY.find((m) => m.key === 'fridge')!;
+    const { key: _k, label, ...input } = fridge;
+    void _k;
+    const out = ok(addModuleToRun(doc, { ...input, name: label }, 'r', 'end'));
+    const r1 = computeReport(parseFrameDocument(out.doc));
+    expect(out.notes).toEqual([]);
+    const added = r1.members.filter((m) => !r0.members.some((o) => o.id === m.id));
+    // Boundary: 2 uprights + 2 cross-members; rails: 4; bearers: 2.
+    expect(added).toHaveLength(10);
+    // The new bay follows the fridge: 450 + 2 × 10.
+    expect(bay(r1, out.bayId).width_mm).toBe(470);
+    const m = r1.modules.find((x) => x.id === out.moduleId)!;
+    expect(m.bears_on).toHaveLength(2);
+    // It sits on the seat: the top of the bottom rails, 120.
+    expect(m.min_mm.z).toBe(120);
+    expect(r1.warnings.filter((w) => w.code === 'module-unsupported')).toEqual([]);
+    expect(out.label).toBe('Add “Upright fridge”');
+  });
+
+  it('a module standing free, into an open bay: slide rails for a drawer stack, hangers for a sink', async () => {
+    const { putModuleInBay } = await import('@shared/editing/fit-module');
+    for (const [bearing, count] of [
+      ['side-rails', 2],
+      ['hung', 2],
+    ] as const) {
+      const doc = coolerAndOpenBay();
+      const withFree: FrameDocument = {
+        ...doc,
+        modules: [...doc.modules, { type: 'module', id: 'extra', name: 'Extra', kind: 'other', bearing, size: { w_mm: 300, d_mm: 400, h_mm: 200 }, mass_kg: 5, contents_kg: 0, place: { x: { offset_mm: 2000 } } }],
+      };
+      const out = ok(putModuleInBay(withFree, 'extra', 'bay-b'));
+      const r = computeReport(parseFrameDocument(out.doc));
+      expect(r.modules.find((m) => m.id === 'extra')?.bears_on, bearing).toHaveLength(count);
+    }
+  });
+});
