@@ -62,6 +62,15 @@ describe('a cabinet layout with stacked bays (the side galley example, 40×40, s
     expect(member(r2, 'bay-sink-slide-l').min_mm.z - member(r, 'bay-sink-slide-l').min_mm.z).toBeCloseTo(15, 9);
   });
 
+  it('says when a stack grows into the module above it, by how much, in words', () => {
+    expect(r.warnings.filter((w) => w.code === 'module-clash')).toEqual([]);
+    // Cutlery drawer 400 tall: 372.7 … 772.7, into the sink hanging at 680 … 860 by 92.7 mm.
+    const r1 = computeReport(resize(doc, 'drawer-mid', 400));
+    expect(r1.warnings.filter((w) => w.code === 'module-clash').map((w) => w.message)).toEqual([
+      '“Cutlery drawer” runs 92.7 mm into “Sink with tap”: move it, choose a smaller one, or give the frame more room there',
+    ]);
+  });
+
   it('names its members in words a builder reads, never by a record id', () => {
     for (const m of doc.members) expect(m.name, m.id).not.toMatch(/bay-|galley|cooler-drawer/);
   });
