@@ -228,3 +228,24 @@ describe('adding a module to a run', () => {
     }
   });
 });
+
+describe('adding a cabinet run to an existing frame', () => {
+  it('puts the whole layout beside what is there, with its own datums and ids, every module seated', async () => {
+    const { addCabinetRun } = await import('@shared/editing/cabinet');
+    const { galleySpec } = await import('./cabinet-fixtures');
+    const doc = galleyDoc();
+    const out = ok(addCabinetRun(doc, galleySpec(), { x: 2500, y: 0, z: 0 }));
+    const next = parseFrameDocument(out.doc);
+    expect(next.runs).toHaveLength(2);
+    expect(next.members).toHaveLength(doc.members.length * 2);
+    const r = computeReport(next);
+    const r0 = computeReport(doc);
+    // The copy stands 2500 mm to the right: its first upright at 2500, its tank at the tank's height.
+    expect(member(r, `${out.runId}-u0-f`).min_mm.x).toBe(2500);
+    const tank = r.modules.find((m) => m.id !== 'tank' && m.name === 'Fresh water tank 25 L')!;
+    expect(tank.min_mm.z).toBe(r0.modules.find((m) => m.id === 'tank')!.min_mm.z);
+    for (const m of r.modules) expect(m.bears_on.length, m.id).toBeGreaterThan(0);
+    const bad = addCabinetRun(doc, { ...galleySpec(), depth_mm: -1 });
+    expect(bad.ok ? '' : bad.reason).toMatch(/^depth_mm: must be more than 0/);
+  });
+});
