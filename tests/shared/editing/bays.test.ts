@@ -249,3 +249,22 @@ describe('adding a cabinet run to an existing frame', () => {
     expect(bad.ok ? '' : bad.reason).toMatch(/^depth_mm: must be more than 0/);
   });
 });
+
+describe('moving a module to another run', () => {
+  it('leaves its old carrying members behind and gets new ones from the new bay’s rails', async () => {
+    const { addCabinetRun } = await import('@shared/editing/cabinet');
+    const { putModuleInBay } = await import('@shared/editing/fit-module');
+    const doc = coolerAndOpenBay();
+    const two = ok(addCabinetRun(doc, { name: 'Second', profile: '30x30-s8', depth_mm: 600, height_mm: 700, seat_mm: 200, clearance_mm: 10, bays: [{ id: 'bay-c', width_mm: 400 }] }, { x: 2000, y: 0, z: 0 }));
+    const open = two.doc.runs[1].bays[0].id;
+    const out = ok(putModuleInBay(two.doc, 'cooler', open));
+    const r = computeReport(parseFrameDocument(out.doc));
+    const cooler = r.modules.find((m) => m.id === 'cooler')!;
+    expect(cooler.bay_id).toBe(open);
+    // On the second cabinet's seat (200) now, on two new bearers; the old ones are gone.
+    expect(cooler.min_mm.z).toBe(200);
+    expect(cooler.bears_on).toHaveLength(2);
+    expect(r.members.map((m) => m.id)).not.toContain('bay-a-bearer-l');
+    expect(r.warnings.filter((w) => w.code === 'module-unsupported')).toEqual([]);
+  });
+});
