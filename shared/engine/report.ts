@@ -5,6 +5,7 @@ import type { FrameDocument } from '../model/frame-document';
 import { roleOf } from '../model/member';
 import { checkReferences } from '../model/references';
 import { findBearings } from './bearing';
+import { findClashes } from './clashes';
 import { ai, type Box } from './box';
 import { CAUTIONS, DEFLECTION_NOTE, FIXINGS_CAUTION, LOAD_MODEL_NOTES, SAFETY_FACTOR_NOTE, SHOCK_FACTOR_NOTE } from './cautions';
 import { COLUMN_SOURCE } from './column';
@@ -192,7 +193,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > governing.utilisation)) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'beam' };
   for (const c of columns) if (governing === null || c.utilisation > governing.utilisation) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'column' };
 
-  const warnings = [...joints.warnings, ...frameWarnings(members, joints), ...bearingWarnings, ...hardware.warnings, ...loads.warnings];
+  const warnings = [...joints.warnings, ...frameWarnings(members, joints), ...bearingWarnings, ...findClashes(modules, members, eff), ...hardware.warnings, ...loads.warnings];
   for (const c of columns) {
     if (c.utilisation > 1) {
       warnings.push({
@@ -265,6 +266,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       run_id: b.run.id,
       index: b.index,
       module_id: b.bay.module ?? null,
+      stack_ids: b.bay.stack ?? [],
       start_mm: mm(b.start_mm),
       end_mm: mm(b.end_mm),
       width_mm: mm(b.width_mm),
