@@ -34,7 +34,9 @@ export async function run(args: string[]): Promise<unknown> {
   if (values.slide !== 'side-mount' && values.slide !== 'under-mount') throw new InputError('--slide', `--slide: side-mount or under-mount (got "${values.slide}")`);
   if (values.joint !== undefined && values.joint !== 'butt' && values.joint !== 'dado') throw new InputError('--joint', `--joint: butt or dado (got "${values.joint}")`);
   const len = (k: string): number | undefined => (values[k] === undefined ? undefined : parseLength(values[k] as string, `--${k}`));
-  const slide = slidePreset(values.slide);
+  // Slides are sold in inch lengths where the builder measures in inches.
+  const inches = ['width', 'height', 'depth'].some((k) => /in|"|ft|'/.test(values[k] as string));
+  const slide = slidePreset(values.slide, inches ? 'inch' : 'metric');
   const sd = len('side-deduction');
   const br = len('bottom-recess');
   if (sd !== undefined) slide.sideDeduction_mm = sd;

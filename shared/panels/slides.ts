@@ -28,10 +28,17 @@ export type SlideRules = z.output<typeof slideRulesSchema>;
 export type SlideType = SlideRules['type'];
 
 const inch = (v: number): number => v * 25.4;
-/** Metric nominal lengths 250–700 mm in 50 mm steps and inch lengths 10–28 in in 2 in steps, both commonly sold. */
-const SIDE_MOUNT_LENGTHS = [250, 300, 350, 400, 450, 500, 550, 600, 650, 700, ...[10, 12, 14, 16, 18, 20, 22, 24, 26, 28].map(inch)].sort((a, b) => a - b);
-/** Concealed slides are commonly sold in 3 in steps (9–21 in) and in metric 250–600 mm (recalled). */
-const UNDER_MOUNT_LENGTHS = [250, 270, 300, 350, 400, 450, 500, 550, 600, ...[9, 12, 15, 18, 21].map(inch)].sort((a, b) => a - b);
+export type SlideSeries = 'metric' | 'inch';
+/** Side-mount slides are commonly sold 250–700 mm in 50 mm steps, or 10–28 in in 2 in steps (common practice). */
+const SIDE_MOUNT_LENGTHS: Record<SlideSeries, number[]> = {
+  metric: [250, 300, 350, 400, 450, 500, 550, 600, 650, 700],
+  inch: [10, 12, 14, 16, 18, 20, 22, 24, 26, 28].map(inch),
+};
+/** Concealed slides are commonly sold 250–600 mm, or 9–21 in in 3 in steps (recalled [M]). */
+const UNDER_MOUNT_LENGTHS: Record<SlideSeries, number[]> = {
+  metric: [250, 270, 300, 350, 400, 450, 500, 550, 600],
+  inch: [9, 12, 15, 18, 21].map(inch),
+};
 
 /**
  * Side-mount ball-bearing slide: 1/2 in (12.7 mm) per side is the common practice (DOMAIN.md, no source); 1/2 in
@@ -45,7 +52,7 @@ export const SIDE_MOUNT: SlideRules = Object.freeze({
   rearClearance_mm: 0,
   bottomRecess_mm: 0,
   maxSideThickness_mm: null,
-  lengths_mm: SIDE_MOUNT_LENGTHS,
+  lengths_mm: SIDE_MOUNT_LENGTHS.metric,
   screwsPerSlide: 3,
 }) as SlideRules;
 
@@ -62,13 +69,15 @@ export const UNDER_MOUNT: SlideRules = Object.freeze({
   rearClearance_mm: inch(1 / 4),
   bottomRecess_mm: inch(1 / 2),
   maxSideThickness_mm: 16,
-  lengths_mm: UNDER_MOUNT_LENGTHS,
+  lengths_mm: UNDER_MOUNT_LENGTHS.metric,
   screwsPerSlide: 3,
 }) as SlideRules;
 
-export function slidePreset(type: SlideType): SlideRules {
+/** A fresh, editable copy of a preset, with the nominal lengths sold in the builder's series. */
+export function slidePreset(type: SlideType, series: SlideSeries = 'metric'): SlideRules {
   const base = type === 'side-mount' ? SIDE_MOUNT : UNDER_MOUNT;
-  return { ...base, lengths_mm: [...base.lengths_mm] };
+  const lengths = type === 'side-mount' ? SIDE_MOUNT_LENGTHS : UNDER_MOUNT_LENGTHS;
+  return { ...base, lengths_mm: [...lengths[series]] };
 }
 
 /** The longest nominal length that fits `depth_mm` with the slide's rear clearance, or null when none does. */
