@@ -5,3 +5,5 @@ export * from './drawer-faces';
 export * from './materials';
 export * from './parts';
 export * from './slides';
+export * from './openings';
+export * from './sheet-goods';
