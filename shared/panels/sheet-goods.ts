@@ -3,6 +3,7 @@
 // cut list groups them and the sheet planner nests each material on its own sheets; their mass and centre of
 // gravity join the frame's.
 import type { FrameReport } from '../engine/report-types';
+import { InputError } from '../errors';
 import type { FrameDocument } from '../model/frame-document';
 import type { Vec3 } from '../model/axis';
 import { bayPanel } from './bay-panels';
@@ -74,7 +75,15 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
   };
   const drawers: SheetGoods['drawers'] = [];
   for (const o of drawerOpenings(report)) {
-    const box = drawerBox({ opening: { width_mm: o.width_mm, height_mm: o.height_mm, depth_mm: o.depth_mm }, slide: opts.slide, joint: opts.joint, thickness_mm: opts.box.thickness_mm, bottomThickness_mm: opts.bottom.thickness_mm, support: o.support });
+    let box: DrawerBox;
+    try {
+      box = drawerBox({ opening: { width_mm: o.width_mm, height_mm: o.height_mm, depth_mm: o.depth_mm }, slide: opts.slide, joint: opts.joint, thickness_mm: opts.box.thickness_mm, bottomThickness_mm: opts.bottom.thickness_mm, support: o.support });
+    } catch (err) {
+      // One drawer that cannot be sized (too shallow for any slide…) must not hide every other part.
+      if (!(err instanceof InputError)) throw err;
+      notes.push(`${o.name}: no drawer box — ${err.message}`);
+      continue;
+    }
     const at = centre(o.min_mm, o.max_mm);
     for (const p of box.parts) add({ ...p, name: `${o.name}: ${p.name.toLowerCase()}` }, p.name === 'Bottom' ? opts.bottom : opts.box, o.module_id, at);
     const faces = drawerFaces({ opening: { width_mm: o.width_mm, height_mm: o.height_mm }, style: opts.faceStyle, shares: [1], thickness_mm: opts.face.thickness_mm });
