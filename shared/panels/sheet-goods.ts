@@ -56,7 +56,11 @@ export function defaultSheetGoodsOptions(): SheetGoodsOptions {
 }
 
 export type PlacedPart = SheetPart & { material: SheetMaterial; mass_kg: number; owner: string; centre_mm: Vec3 };
+/** Where a drawer box, panel or countertop sits in the frame, for drawing (thin boxes, frame millimetres). */
+export type GoodsBox = { id: string; kind: 'drawer' | 'panel' | 'top'; min_mm: Vec3; max_mm: Vec3 };
+
 export type SheetGoods = {
+  boxes: GoodsBox[];
   drawers: { opening: DrawerOpening; box: DrawerBox; face: { width_mm: number; height_mm: number } }[];
   parts: PlacedPart[];
   hardware: HardwareLine[];
@@ -70,6 +74,7 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
   const parts: PlacedPart[] = [];
   const hardware: HardwareLine[] = [];
   const notes: string[] = [];
+  const boxes: GoodsBox[] = [];
   const add = (p: SheetPart, material: SheetMaterial, owner: string, at: Vec3) => {
     parts.push({ ...p, thickness_mm: material.thickness_mm, material, owner, centre_mm: at, mass_kg: p.qty * partMass_kg(p.length_mm, p.width_mm, material.thickness_mm, material.density_kg_m3) });
   };
@@ -90,10 +95,13 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
     for (const p of faces.parts) add({ ...p, name: `${o.name}: face` }, opts.face, o.module_id, { ...at, y: o.min_mm.y });
     hardware.push(...box.hardware, ...faces.hardware);
     drawers.push({ opening: o, box, face: { width_mm: faces.faces[0].width_mm, height_mm: faces.faces[0].height_mm } });
+    const x0 = o.min_mm.x + opts.slide.sideDeduction_mm;
+    const z0 = o.min_mm.z + opts.slide.bottomClearance_mm;
+    boxes.push({ id: o.module_id, kind: 'drawer', min_mm: { x: x0, y: o.min_mm.y, z: z0 }, max_mm: { x: x0 + box.box.width_mm, y: o.min_mm.y + box.box.length_mm, z: z0 + box.box.height_mm } });
   }
   for (const bay of report.bays) {
     const f = bayFaceOpenings(report, bay.id);
-    const panel = (name: string, face: typeof f.back, at: Vec3) => {
+    const panel = (name: string, face: typeof f.back, at: Vec3, plane: 'x' | 'y', outward: 1 | -1) => {
       let mount = opts.panelMount;
       if (mount === 'slot' && face.crossed_by.length) {
         notes.push(`${name}: a member crosses it (${face.crossed_by.join(', ')}), so it is mounted on the surface`);
@@ -102,10 +110,22 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
       const p = bayPanel({ name, opening: { length_mm: face.length_mm, width_mm: face.width_mm }, mount, thickness_mm: opts.panel.thickness_mm, slot_mm: opts.slot_mm, profile_mm: opts.profile_mm });
       add(p.part, opts.panel, bay.id, at);
       hardware.push(...p.hardware);
+      // Drawn on the face's plane, grown by its lap in the face's two directions, its thickness outward.
+      const grow = (p.part.length_mm - face.length_mm) / 2;
+      const min = { ...face.min_mm };
+      const max = { ...face.max_mm };
+      for (const a of ['x', 'y', 'z'] as const) {
+        if (a === plane) continue;
+        min[a] -= grow;
+        max[a] += grow;
+      }
+      if (outward > 0) max[plane] = min[plane] + opts.panel.thickness_mm;
+      else min[plane] = max[plane] - opts.panel.thickness_mm;
+      boxes.push({ id: name, kind: 'panel', min_mm: min, max_mm: max });
     };
-    if (opts.backs) panel(`${bay.id}: back`, f.back, centre(f.back.min_mm, f.back.max_mm));
-    if (opts.sides && f.left) panel(`${bay.id}: left side`, f.left, centre(f.left.min_mm, f.left.max_mm));
-    if (opts.sides && f.right) panel(`${bay.id}: right side`, f.right, centre(f.right.min_mm, f.right.max_mm));
+    if (opts.backs) panel(`${bay.id}: back`, f.back, centre(f.back.min_mm, f.back.max_mm), 'y', 1);
+    if (opts.sides && f.left) panel(`${bay.id}: left side`, f.left, centre(f.left.min_mm, f.left.max_mm), 'x', -1);
+    if (opts.sides && f.right) panel(`${bay.id}: right side`, f.right, centre(f.right.min_mm, f.right.max_mm), 'x', 1);
   }
   if (opts.countertop && report.members.length) {
     const ms = report.members;
@@ -119,6 +139,7 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
     });
     const cut = top.cutout ? top.cutout.length_mm * top.cutout.width_mm : 0;
     add(top.part, opts.top, 'countertop', { x: (min.x + max.x) / 2, y: (min.y + max.y) / 2, z: max.z + opts.top.thickness_mm / 2 });
+    boxes.push({ id: 'countertop', kind: 'top', min_mm: { x: min.x, y: max.y - top.part.width_mm, z: max.z }, max_mm: { x: max.x, y: max.y, z: max.z + opts.top.thickness_mm } });
     // The cut-out's offcut is not on the top: take its mass off (area fraction).
     const last = parts[parts.length - 1];
     last.mass_kg *= 1 - cut / (top.part.length_mm * top.part.width_mm);
@@ -132,7 +153,7 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
     e.mass_kg += p.mass_kg;
     byMat.set(p.material.id, e);
   }
-  return { drawers, parts, hardware: mergeHardware(hardware), mass: { total_kg: total, cog_mm: cog, by_material: [...byMat.values()] }, notes };
+  return { boxes, drawers, parts, hardware: mergeHardware(hardware), mass: { total_kg: total, cog_mm: cog, by_material: [...byMat.values()] }, notes };
 }
 
 function mergeHardware(lines: HardwareLine[]): HardwareLine[] {
