@@ -1,6 +1,6 @@
 // The `calc` command line: `npm run -s calc -- <command> [args]`. Prints JSON on stdout; a bad input exits 1 with
 // a message on stderr. Each command lives in scripts/calc/<command>.ts and exports `run(args): Promise<unknown>`.
-const commands = ['profiles', 'section', 'beam', 'column', 'length', 'report', 'cut', 'cabinet', 'swap'] as const;
+const commands = ['profiles', 'section', 'beam', 'column', 'length', 'report', 'cut', 'cabinet', 'swap', 'drawer', 'sheets'] as const;
 type Command = (typeof commands)[number];
 
 class UsageError extends Error {}

@@ -5,7 +5,9 @@ import { resolveDatums } from '../engine/resolve-datums';
 import { resolveMembers } from '../engine/resolve-members';
 import type { Vec3 } from '../model/axis';
 import type { FrameDocument } from '../model/frame-document';
-import { boundsOf, type Scene, type SceneBay, type SceneMember, type SceneModule } from './scene';
+import { InputError } from '../errors';
+import { sheetGoods } from '../panels/sheet-goods';
+import { boundsOf, type Scene, type SceneBay, type SceneGoods, type SceneMember, type SceneModule } from './scene';
 
 const toBox = (min: Vec3, max: Vec3): Box => ({ min: [min.x, min.y, min.z], max: [max.x, max.y, max.z] });
 
@@ -62,7 +64,19 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport): Scene 
     members,
     modules,
     bays,
+    goods: goodsOf(report),
     bounds: boundsOf([...members.map((m) => m.box), ...modules.map((m) => m.box)]),
     cog: report.mass.cog_mm,
   };
+}
+
+/** The default drawers, panels and countertop of a run of bays, for drawing; none where they cannot be sized. */
+function goodsOf(report: FrameReport): SceneGoods[] {
+  if (!report.bays.length) return [];
+  try {
+    return sheetGoods(report).boxes.map((b) => ({ id: b.id, kind: b.kind, box: toBox(b.min_mm, b.max_mm) }));
+  } catch (err) {
+    if (err instanceof InputError) return [];
+    throw err;
+  }
 }

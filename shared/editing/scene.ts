@@ -39,16 +39,21 @@ export type SceneModule = {
 export type SceneBay = { id: string; run: string; axis: Axis; index: number; start_mm: number; end_mm: number; module: string | null };
 
 /** What the canvas needs from one run of the engine. */
+/** A drawer box, panel or countertop the sheet goods put in a bay: drawn thin and translucent, never picked. */
+export type SceneGoods = { id: string; kind: 'drawer' | 'panel' | 'top'; box: Box };
+
 export type Scene = {
   members: SceneMember[];
   modules: SceneModule[];
   bays: SceneBay[];
+  /** Absent on scenes built without a report (hand-made test scenes, layout previews). */
+  goods?: SceneGoods[];
   /** Everything drawn (members and modules); null for an empty frame. */
   bounds: Box | null;
   cog: Vec3 | null;
 };
 
-export const emptyScene = (): Scene => ({ members: [], modules: [], bays: [], bounds: null, cog: null });
+export const emptyScene = (): Scene => ({ members: [], modules: [], bays: [], goods: [], bounds: null, cog: null });
 
 export function boundsOf(boxes: readonly Box[]): Box | null {
   if (boxes.length === 0) return null;

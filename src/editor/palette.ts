@@ -3,6 +3,10 @@ import type { ModuleKind } from '@shared/model/module';
 /** Colours of the drawing, matched to the app theme (plugins/vuetify.ts): bar stock greys, copper for what is active. */
 export const PALETTE = {
   paper: '#F4F6F8',
+  /** Sheet goods (drawer boxes, panels, countertop): wood tones, mostly transparent so members read through. */
+  goodsDrawer: 'rgba(176, 124, 60, 0.16)',
+  goodsPanel: 'rgba(176, 124, 60, 0.10)',
+  goodsEdge: 'rgba(140, 92, 36, 0.55)',
   gridMinor: 'rgba(43, 48, 54, 0.06)',
   gridMajor: 'rgba(43, 48, 54, 0.14)',
   axis: 'rgba(43, 48, 54, 0.35)',

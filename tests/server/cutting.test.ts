@@ -130,7 +130,7 @@ describe('printed documents and CSV for a frame', () => {
     for (const mark of new Set(cuts.map((x) => x.mark))) expect(text).toMatch(new RegExp(`\\b${mark}\\b`));
   });
 
-  it.each(['drill-list.pdf', 'pick-list.pdf', 'labels.pdf'])('%s renders for a member and is refused to outsiders', async (doc) => {
+  it.each(['drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'sheet-plan.pdf'])('%s renders for a member and is refused to outsiders', async (doc) => {
     const res = await binary(c('cutter').get(`/api/frames/${w.frameId}/shop/${doc}?paper=LETTER&units=in&frac=32`));
     expect(res.status).toBe(200);
     expect((res.body as Buffer).subarray(0, 5).toString()).toBe('%PDF-');

@@ -12,7 +12,8 @@ import { sawSheet } from '@shared/shop/saw-list';
 import type { Orm } from '../../db';
 import { ForbiddenError } from '../../errors';
 import { currentUserId } from '../../http/current-user';
-import { drillListPdf, labelsPdf, pickListPdf, sawListPdf } from '../../pdf';
+import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../../pdf';
+import { frameSheetPlans } from '../orders/sheet-plans';
 import { parseInput } from '../../validate';
 import { authorizeFrame } from '../access/access.service';
 import { frameReport, planFrame, shopMeta, supplierFor } from '../orders/frame-shop.service';
@@ -21,7 +22,7 @@ import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { cuttingState, latestSession, startSession, tick, untick } from './cutting.service';
 import { can } from '@shared/api/roles';
 
-const DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv'] as const;
+const DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv', 'sheet-plan.pdf'] as const;
 
 const docQuerySchema = z.object({
   paper: paperSchema.default('A4'),
@@ -87,6 +88,9 @@ export function cuttingRouter(orm: Orm): Router {
     const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
     const base = `${frame.name}-r${frame.version}`;
     const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
+    if (doc === 'sheet-plan.pdf') {
+      return sendFile(res, await sheetPlanPdf(frameSheetPlans(report), meta), 'application/pdf', `${base}-sheet-plan.pdf`);
+    }
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
     const needsPlan = (doc === 'saw-list.pdf' && !frozen) || doc === 'order-list.csv';

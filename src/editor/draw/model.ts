@@ -2,7 +2,7 @@ import { resolveProfile, type Outline } from '@shared/catalog/profiles';
 import { toScreenX, toScreenY, visibleRect, type Camera } from '@shared/editing/camera';
 import { gridSteps, gridValues, type GridUnit } from '@shared/editing/grid';
 import type { Scene, SceneMember, ViewItem } from '@shared/editing/scene';
-import { rectsOverlap, screenAxis, type ViewDef } from '@shared/editing/views';
+import { projectBox, rectsOverlap, screenAxis, type ViewDef } from '@shared/editing/views';
 import { MODULE_EDGE, MODULE_FILL, PALETTE, utilisationBand } from '../palette';
 
 export type Viewport = { width: number; height: number };
@@ -171,6 +171,25 @@ export function drawModules(ctx: CanvasRenderingContext2D, o: ModelOptions): voi
     }
   });
   ctx.globalAlpha = 1;
+}
+
+/** Drawer boxes, panels and the countertop: thin, translucent outlines over the modules, so the frame reads through. */
+export function drawSheetGoods(ctx: CanvasRenderingContext2D, o: ModelOptions): void {
+  const goods = o.scene.goods;
+  if (!goods?.length) return;
+  const visible = visibleRect(o.cam, o.vp.width, o.vp.height);
+  ctx.save();
+  ctx.lineWidth = 1;
+  for (const g of goods) {
+    const r = projectBox(o.view, g.box);
+    if (!rectsOverlap(r, visible)) continue;
+    const sc = screenRect(o.cam, r);
+    ctx.fillStyle = g.kind === 'drawer' ? PALETTE.goodsDrawer : PALETTE.goodsPanel;
+    ctx.fillRect(sc.x, sc.y, sc.w, sc.h);
+    ctx.strokeStyle = PALETTE.goodsEdge;
+    ctx.strokeRect(Math.round(sc.x) + 0.5, Math.round(sc.y) + 0.5, Math.round(sc.w), Math.round(sc.h));
+  }
+  ctx.restore();
 }
 
 export function drawMembers(ctx: CanvasRenderingContext2D, o: ModelOptions): void {

@@ -1,0 +1,29 @@
+// Sheet jobs from a frame's sheet goods: one job per material (parts of one thickness and face come off the same
+// sheets), grain kept on every part that shows it.
+import type { PlacedPart } from '../panels/sheet-goods';
+import type { SheetJob } from './job';
+
+export type SheetStock = { length: number; width: number; price?: number; qty?: number | null; label?: string };
+export type MaterialJob = { materialId: string; material: string; thickness_mm: number; job: SheetJob };
+
+/** Common practice (REFERENCES.md "Sheet goods"): 2440 × 1220 mm sheets, a track-saw kerf of about 3 mm, 10 mm trim. */
+export const DEFAULT_SHEET: SheetStock = { length: 2440, width: 1220 };
+export const DEFAULT_SHEET_KERF = 3;
+export const DEFAULT_SHEET_TRIM = 10;
+
+export function sheetJobsFromParts(parts: readonly PlacedPart[], opts: { sheets?: SheetStock[]; kerf?: number; trim?: number } = {}): MaterialJob[] {
+  const by = new Map<string, PlacedPart[]>();
+  for (const p of parts) by.set(p.material.id, [...(by.get(p.material.id) ?? []), p]);
+  const round = (v: number): number => Math.round(v * 10) / 10;
+  return [...by].map(([id, ps]) => ({
+    materialId: id,
+    material: ps[0].material.name,
+    thickness_mm: ps[0].material.thickness_mm,
+    job: {
+      kerf: opts.kerf ?? DEFAULT_SHEET_KERF,
+      trim: opts.trim ?? DEFAULT_SHEET_TRIM,
+      sheets: opts.sheets ?? [DEFAULT_SHEET],
+      parts: ps.map((p) => ({ length: round(p.length_mm), width: round(p.width_mm), qty: p.qty, label: p.name.slice(0, 120), grain: p.grain })),
+    },
+  }));
+}

@@ -1,0 +1,69 @@
+import { describe, expect, it } from 'vitest';
+import { bayPanel, countertop, drawerFaces, partMass_kg, SHEET_MATERIALS } from '@shared/panels/index';
+import { errorOf } from '../../support/input-error';
+
+// An example frame (invented): 40×40 slot 8 profile, uprights at 0 and 640 mm (outer faces), rails at the floor
+// and at 760 mm (outer faces). The bay's side opening between inner faces is 640 − 2·40 = 560 wide and
+// 760 − 2·40 = 680 high. The panel rules (engagement = slot opening, 1 mm play, screws ≤ 300 mm apart) are
+// common practice, no source.
+const opening = { length_mm: 640 - 2 * 40, width_mm: 760 - 2 * 40 };
+
+describe('bay panels on the example frame', () => {
+  it('in the slot: a 6 mm panel runs 8 mm into each slot: 560 + 16 − 1 = 575 by 680 + 16 − 1 = 695', () => {
+    const p = bayPanel({ name: 'Side', opening, mount: 'slot', thickness_mm: 6, slot_mm: 8, profile_mm: 40 });
+    expect(p.part.length_mm).toBe(575);
+    expect(p.part.width_mm).toBe(695);
+    expect(p.hardware).toEqual([]);
+  });
+  it('in the slot: a 9 mm panel does not pass an 8 mm slot, and the error names the thickness', () => {
+    expect(errorOf(() => bayPanel({ name: 'Side', opening, mount: 'slot', thickness_mm: 9, slot_mm: 8, profile_mm: 40 })).field).toBe('thickness_mm');
+  });
+  it('surface-mounted: covers the members, 640 × 760, with ⌈640/300⌉·2 + ⌈760/300⌉·2 = 12 screws and drop-in T-nuts', () => {
+    const p = bayPanel({ name: 'Side', opening, mount: 'surface', thickness_mm: 15, slot_mm: 8, profile_mm: 40 });
+    expect(p.part.length_mm).toBe(640);
+    expect(p.part.width_mm).toBe(760);
+    expect(p.screws).toBe(12);
+    expect(p.hardware.find((h) => h.item === 'T-nut, drop-in')?.qty).toBe(12);
+  });
+});
+
+describe('countertop', () => {
+  it('run 1200 × 560 with 25 mm front and 10 mm left overhang; sink 400 × 350 at (700, 80), 3 mm clearance', () => {
+    const c = countertop({ run: { length_mm: 1200, depth_mm: 560 }, overhang: { front_mm: 25, back_mm: 0, left_mm: 10, right_mm: 0 }, sink: { x_mm: 700, y_mm: 80, w_mm: 400, d_mm: 350 }, clearance_mm: 3 });
+    expect(c.part.length_mm).toBe(1210);
+    expect(c.part.width_mm).toBe(585);
+    expect(c.cutout).toEqual({ x_mm: 707, y_mm: 102, length_mm: 406, width_mm: 356 });
+  });
+  it('a sink past the end of the run is refused', () => {
+    expect(errorOf(() => countertop({ run: { length_mm: 600, depth_mm: 560 }, sink: { x_mm: 400, y_mm: 80, w_mm: 400, d_mm: 350 } })).field).toBe('sink');
+  });
+});
+
+describe('drawer faces (gaps and overlay are common practice, no source)', () => {
+  it('inset, three faces 1:1:2 in a 500 × 600 opening, 3 mm gaps: 494 wide, (600 − 4·3) split 147, 147, 294', () => {
+    const { faces, hardware } = drawerFaces({ opening: { width_mm: 500, height_mm: 600 }, style: 'inset', shares: [1, 1, 2], gap_mm: 3 });
+    expect(faces.map((f) => f.width_mm)).toEqual([494, 494, 494]);
+    expect(faces.map((f) => f.height_mm)).toEqual([147, 147, 294]);
+    expect(faces[2].bottom_mm).toBeCloseTo(3, 9);
+    expect(hardware[0].qty).toBe(12);
+  });
+  it('overlay 15 mm: 530 wide, (600 + 30 − 2·3) split 156, 156, 312', () => {
+    const { faces } = drawerFaces({ opening: { width_mm: 500, height_mm: 600 }, style: 'overlay', shares: [1, 1, 2], gap_mm: 3, overlay_mm: 15 });
+    expect(faces.map((f) => f.width_mm)).toEqual([530, 530, 530]);
+    expect(faces.map((f) => f.height_mm)).toEqual([156, 156, 312]);
+    expect(faces[2].bottom_mm).toBeCloseTo(-15, 9);
+  });
+});
+
+describe('mass from sheet density (densities typical [M], REFERENCES.md)', () => {
+  it('1000 × 500 × 12 mm at 680 kg/m³ = 0.006 m³ × 680 = 4.08 kg', () => {
+    expect(partMass_kg(1000, 500, 12, 680)).toBeCloseTo(4.08, 9);
+  });
+  it('every preset density is marked typical and lies in the REFERENCES.md ranges', () => {
+    for (const m of SHEET_MATERIALS) {
+      expect(m.typical).toBe(true);
+      expect(m.density_kg_m3).toBeGreaterThanOrEqual(450);
+      expect(m.density_kg_m3).toBeLessThanOrEqual(800);
+    }
+  });
+});
