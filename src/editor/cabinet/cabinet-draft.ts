@@ -65,7 +65,7 @@ export function draftBay(type: string): DraftBay {
 }
 
 export function defaultDraft(): CabinetDraft {
-  return { name: 'Galley cabinet', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 80, clearance_mm: 10, bays: [draftBay('cooler'), draftBay('sink'), draftBay('drawers')] };
+  return { name: 'Galley cabinet', profile: '40x40-s8', depth_mm: 640, height_mm: 900, seat_mm: 80, clearance_mm: 10, bays: [draftBay('cooler'), draftBay('sink'), draftBay('drawers')] };
 }
 
 /** The first thing wrong with the draft, in the form's words, or null. */
