@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { cutListRows, fieldValue, pickMember } from './editor-helpers';
+import { computeReport } from '@shared/engine/report';
+import { formatLength } from '@shared/geometry/units';
+import { buildCabinetRun } from '@shared/model/cabinet-run';
+import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
+import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
 
 // A builder with a brand-new account (signed up here, no demo data) lays out their own cabinet, reads its loads,
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
@@ -73,6 +77,22 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     }
     await page.screenshot({ path: screenshotPath('own-cabinet-loads.png') });
 
+    // What the dialog's default layout makes, worked out here by the engine to find things on the drawing.
+    const report = computeReport(buildCabinetRun({ ...specFromDraft(defaultDraft()), name: 'Galley cabinet' }));
+    const bay = (i: number) => report.bays[i];
+
+    // A shelf rail drawn by hand across the sink's bay, its ends snapped to the uprights' faces: it re-lays with them.
+    const left = itemInView(report, 'front', 'run-u1-f');
+    const right = itemInView(report, 'front', 'run-u2-f');
+    await page.getByRole('button', { name: 'Draw', exact: true }).click();
+    const a = await toScreen(page, 'front', left.x1 + 4, 420);
+    const b = await toScreen(page, 'front', right.x0 - 4, 420);
+    await page.mouse.move(a.x, a.y);
+    await page.mouse.down();
+    for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
+    await page.mouse.up();
+    await page.getByRole('button', { name: 'Pick', exact: true }).click();
+
     // The upright between the cooler's and the sink's bays, before the swap.
     await pickMember(page, 'run-u1-f');
     const xBefore = await fieldValue(page, 'part-position-x');
@@ -90,12 +110,15 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     expect(await changed.innerText()).toMatch(/Swap Compressor cooler and Sink with tap/);
     await page.screenshot({ path: screenshotPath('own-cabinet-swapped.png') });
 
-    // The sink is narrower than the cooler: the upright between them moves left by the difference.
+    // The sink's bay now comes first: the upright between the two bays moves by the difference of their widths.
     await pickMember(page, 'run-u1-f');
-    const xAfter = await fieldValue(page, 'part-position-x');
-    expect(parseFloat(xAfter)).toBeLessThan(parseFloat(xBefore));
+    expect(await fieldValue(page, 'part-position-x')).toBe(formatLength(left.x0 + bay(1).width_mm - bay(0).width_mm, 'mm'));
+    // The drawn rail now spans the cooler's wider bay: one part fewer at the sink bay's width, one more at the cooler's.
     const cutAfter = await cutListRows(page);
-    expect(cutAfter).not.toEqual(cutBefore);
+    const qty = (rows: string[][], len: number) => rows.filter((r) => r[2] === formatLength(len, 'mm')).reduce((n, r) => n + Number(r[3]), 0);
+    expect(qty(cutAfter, bay(0).width_mm)).toBe(qty(cutBefore, bay(0).width_mm) + 1);
+    expect(qty(cutAfter, bay(1).width_mm)).toBe(qty(cutBefore, bay(1).width_mm) - 1);
+    expect(await changed.innerText()).toMatch(/1 re-cut|1 new/);
 
     // Undo restores the upright and the cut list.
     await page.locator('[data-view="front"]').focus();
@@ -105,18 +128,23 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     expect(await fieldValue(page, 'part-position-x')).toBe(xBefore);
 
     // A bay at the end brings its upright pair and rails; removing it takes them away again.
-    const memberCount = async () => page.getByRole('list', { name: 'Members' }).getByRole('button').count();
+    const memberCount = async () => {
+      await page.getByRole('tab', { name: 'Part' }).click();
+      const back = page.getByRole('button', { name: '← All members' });
+      if (await back.count()) await back.click();
+      return page.getByRole('list', { name: 'Members' }).getByRole('button').count();
+    };
     const membersBefore = await memberCount();
     await page.getByRole('tab', { name: 'Bays' }).click();
     await page.getByRole('button', { name: 'Add a bay at the end' }).click();
     await page.getByTestId('what-changed').waitFor();
     await pickMember(page, 'run-u4-f');
-    await page.getByRole('button', { name: '← All members' }).click();
-    expect(await memberCount()).toBeGreaterThan(membersBefore);
+    // An upright pair with its two cross-members, and the new bay's four rails.
+    expect(await memberCount()).toBe(membersBefore + 8);
     await page.screenshot({ path: screenshotPath('own-cabinet-bay-added.png') });
     await page.getByRole('tab', { name: 'Bays' }).click();
     await page.getByRole('button', { name: 'Remove bay 4' }).click();
-    await page.getByRole('tab', { name: 'Part' }).click();
+    await expect.poll(() => page.getByTestId('what-changed').innerText()).toMatch(/Remove bay 4/);
     await expect.poll(memberCount).toBe(membersBefore);
   });
 });
