@@ -49,6 +49,8 @@ export type ReportBay = {
   /** Position in the run, from its start. */
   index: number;
   module_id: string | null;
+  /** Modules stacked above `module_id`, bottom to top. */
+  stack_ids: string[];
   start_mm: number;
   end_mm: number;
   width_mm: number;

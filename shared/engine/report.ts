@@ -215,6 +215,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       run_id: b.run.id,
       index: b.index,
       module_id: b.bay.module ?? null,
+      stack_ids: b.bay.stack ?? [],
       start_mm: mm(b.start_mm),
       end_mm: mm(b.end_mm),
       width_mm: mm(b.width_mm),
