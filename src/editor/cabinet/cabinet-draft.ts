@@ -6,6 +6,7 @@ import type { ModuleKind } from '@shared/model/module';
 /** How a module in a bay bears, in the words the layout form offers. */
 export const CABINET_BEARING_WORDS = [
   { title: 'Sits on bearers', value: 'base' },
+  { title: 'Hangs from the top', value: 'hung' },
   { title: 'Runs on side rails', value: 'side-rails' },
 ] as const;
 export type CabinetBearing = (typeof CABINET_BEARING_WORDS)[number]['value'];
