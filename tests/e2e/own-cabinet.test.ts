@@ -12,11 +12,11 @@ import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './edi
 
 const stamp = Date.now().toString(36);
 
-async function signUp(page: Page): Promise<void> {
+async function signUp(page: Page, who = 'builder'): Promise<void> {
   await page.goto('/sign-in');
   await page.getByRole('tab', { name: 'Create account' }).click();
   await page.getByLabel('Your name').fill('New Builder');
-  await page.getByLabel('E-mail').fill(`builder-${stamp}@example.test`);
+  await page.getByLabel('E-mail').fill(`${who}-${stamp}@example.test`);
   await page.getByLabel('Password', { exact: true }).fill('a long enough password');
   await page.getByRole('button', { name: 'Create account', exact: true }).click();
   await page.getByRole('heading', { name: 'Workshops', level: 1 }).waitFor();
@@ -145,5 +145,48 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     await page.getByRole('button', { name: 'Remove bay 4' }).click();
     await expect.poll(() => page.getByTestId('what-changed').innerText()).toMatch(/Remove/);
     await expect.poll(memberCount).toBe(membersBefore);
+  });
+});
+
+describe('options of a module, compared side by side', () => {
+  let page: Page;
+  useBrowserPage(async (opened) => {
+    page = opened;
+    await signUp(page, 'options');
+    await newProject(page);
+    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
+    await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
+    await page.getByTestId('frame-editor').waitFor();
+  });
+
+  it('adds a heavier sink as an option, compares it, uses it, and one undo goes back', async () => {
+    await page.getByRole('tab', { name: 'Modules' }).click();
+    await page.getByRole('list', { name: 'Modules in this frame' }).getByRole('button', { name: /Sink with tap/ }).click();
+    await page.getByRole('tab', { name: 'Part' }).click();
+    // Invented example weights: a pressed-steel sink of 5 kg and a fireclay one of 25 kg.
+    for (const [name, kg] of [['pressed steel', '5 kg'], ['fireclay', '25 kg']]) {
+      await page.getByLabel('Option', { exact: true }).fill(name);
+      const massField = page.locator('.module-options__add').getByLabel('Mass');
+      await massField.fill(kg);
+      await massField.press('Enter');
+      await page.locator('.module-options__add').getByRole('button', { name: 'Add' }).click();
+      await page.getByText(`${name} · ${kg}`).waitFor();
+    }
+    await page.getByTestId('compare-options').click();
+    const table = page.getByRole('table', { name: 'Options side by side' });
+    await table.waitFor();
+    const head = await table.locator('thead th').allInnerTexts();
+    expect(head.slice(1)).toEqual(['Sink with tap (as now)', 'pressed steel', 'fireclay']);
+    const frameMass = (await table.locator('tbody tr').nth(1).locator('td').allInnerTexts()).map((t) => Number.parseFloat(t));
+    // The fireclay sink adds 21 kg to the 4 kg one's frame; the pressed-steel one adds 1 kg.
+    expect(frameMass[2] - frameMass[0]).toBeCloseTo(21, 1);
+    expect(frameMass[1] - frameMass[0]).toBeCloseTo(1, 1);
+    await page.screenshot({ path: screenshotPath('own-cabinet-options.png') });
+    await table.getByRole('button', { name: 'Use this one' }).nth(1).click();
+    await page.getByRole('tab', { name: 'Modules' }).click();
+    await expect.poll(() => page.getByRole('list', { name: 'Modules in this frame' }).innerText()).toMatch(/Sink with tap[\s\S]*25 kg/);
+    await page.locator('[data-view="front"]').focus();
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => page.getByRole('list', { name: 'Modules in this frame' }).innerText()).toMatch(/Sink with tap[\s\S]* 4 kg/);
   });
 });
