@@ -28,6 +28,8 @@ export type DraftBay = {
   raise_mm: number;
   /** An open bay's width. */
   width_mm: number;
+  /** Modules stacked above this one in the same bay, bottom to top (each with the members that carry it). */
+  stack: DraftBay[];
 };
 
 export type CabinetDraft = {
@@ -49,7 +51,7 @@ let nextKey = 1;
 export function draftBay(type: string): DraftBay {
   const lib = MODULE_LIBRARY.find((m) => m.key === type);
   const key = nextKey++;
-  if (!lib) return { key, type: 'open', name: '', w_mm: 300, d_mm: 400, h_mm: 400, mass_kg: 0, contents_kg: 0, bearing: 'base', raise_mm: 0, width_mm: 300 };
+  if (!lib) return { key, type: 'open', name: '', w_mm: 300, d_mm: 400, h_mm: 400, mass_kg: 0, contents_kg: 0, bearing: 'base', raise_mm: 0, width_mm: 300, stack: [] };
   return {
     key,
     type,
@@ -62,7 +64,27 @@ export function draftBay(type: string): DraftBay {
     bearing: lib.bearing === 'side-rails' ? 'side-rails' : 'base',
     raise_mm: 0,
     width_mm: lib.size.w_mm,
+    stack: [],
   };
+}
+
+/** Room between a stacked module and the one below: the clearance, plus a rail's thickness under one that sits. */
+export const stackRoom = (m: Pick<DraftBay, 'bearing'>, clearance: number, t: number): number => (m.bearing === 'base' ? clearance + t : clearance);
+
+/** Bottom and top (mm above the floor) of each module in a bay, bottom first, as the layout will place them. */
+export function stackHeights(d: CabinetDraft, bay: DraftBay): { module: DraftBay; z0: number; z1: number }[] {
+  const t = profileThickness(d.profile);
+  const out: { module: DraftBay; z0: number; z1: number }[] = [];
+  if (bay.type === 'open') return out;
+  const z0 = bay.bearing === 'hung' ? d.height_mm - t - bay.h_mm : d.seat_mm + bay.raise_mm;
+  out.push({ module: bay, z0, z1: z0 + bay.h_mm });
+  let top = z0 + bay.h_mm;
+  for (const m of bay.stack) {
+    const b = top + (m.raise_mm > 0 ? m.raise_mm : stackRoom(m, d.clearance_mm, t));
+    out.push({ module: m, z0: b, z1: b + m.h_mm });
+    top = b + m.h_mm;
+  }
+  return out;
 }
 
 export function defaultDraft(): CabinetDraft {
@@ -98,8 +120,19 @@ export function draftProblem(d: CabinetDraft): string | null {
     if (!(b.mass_kg >= 0 && b.mass_kg <= CABINET_LIMITS.mass_kg) || !(b.contents_kg >= 0 && b.contents_kg <= CABINET_LIMITS.mass_kg))
       return `${label}: masses must be between 0 and ${CABINET_LIMITS.mass_kg} kg`;
     if (b.d_mm > d.depth_mm - 2 * t) return `${label} is ${b.d_mm} mm deep; inside the frame there is ${d.depth_mm - 2 * t} mm. Make the cabinet deeper or the module shallower.`;
-    if (d.seat_mm + b.raise_mm + b.h_mm > d.height_mm - t)
+    if (b.bearing !== 'hung' && d.seat_mm + b.raise_mm + b.h_mm > d.height_mm - t)
       return `${label} is too tall: ${b.h_mm} mm on the seat at ${d.seat_mm} mm reaches above the top rails at ${d.height_mm - t} mm.`;
+    for (const m of b.stack) {
+      const p2 = len(m.w_mm, `${label}: width of ${m.name || 'the module above'}`) ?? len(m.d_mm, `${label}: depth of ${m.name || 'the module above'}`) ?? len(m.h_mm, `${label}: height of ${m.name || 'the module above'}`);
+      if (p2) return p2;
+      if (m.d_mm > d.depth_mm - 2 * t) return `${label}: ${m.name || 'the module above'} is deeper than the inside of the frame (${d.depth_mm - 2 * t} mm).`;
+    }
+    if (b.stack.length > 0 && (b.bearing === 'hung' || b.stack.some((m) => m.bearing === 'hung')))
+      return `${label}: a module that hangs from the top cannot have another stacked over it; make it sit on bearers or run on side rails.`;
+    const heights = stackHeights(d, b);
+    const top = heights[heights.length - 1];
+    if (top && top.z1 > d.height_mm - t + 1e-6)
+      return `${label}: the stack reaches ${Math.round(top.z1)} mm, above the top rails at ${d.height_mm - t} mm. Make a module lower, or the cabinet taller.`;
   }
   return null;
 }
@@ -128,6 +161,12 @@ export function specFromDraft(d: CabinetDraft): CabinetSpec {
     const id = `bay${i + 1}`;
     used.add(id);
     if (b.type === 'open') return { id, width_mm: b.width_mm };
+    const stack = b.stack.map(toModule);
+    return { id, module: toModule(b), ...(stack.length ? { stack } : {}) };
+  });
+  return { name: d.name.trim(), profile: d.profile, depth_mm: d.depth_mm, height_mm: d.height_mm, seat_mm: d.seat_mm, clearance_mm: d.clearance_mm, bays };
+
+  function toModule(b: DraftBay): CabinetModule {
     const lib = MODULE_LIBRARY.find((m) => m.key === b.type);
     const name = b.name.trim() || lib?.label || 'Module';
     const module: CabinetModule = {
@@ -141,9 +180,8 @@ export function specFromDraft(d: CabinetDraft): CabinetSpec {
       ...(lib?.kind === 'tank' && b.litres !== undefined ? { litres: b.litres } : {}),
       ...(b.raise_mm > 0 ? { raise_mm: b.raise_mm } : {}),
     };
-    return { id, module };
-  });
-  return { name: d.name.trim(), profile: d.profile, depth_mm: d.depth_mm, height_mm: d.height_mm, seat_mm: d.seat_mm, clearance_mm: d.clearance_mm, bays };
+    return module;
+  }
 }
 
 /** Bay openings along the run (mm from the left outer face), for the preview. */
@@ -151,7 +189,7 @@ export function draftLayout(d: CabinetDraft): { t: number; width: number; bays: 
   const t = profileThickness(d.profile);
   let x = t;
   const bays = d.bays.map((bay) => {
-    const w = bay.type === 'open' ? bay.width_mm : bay.w_mm + 2 * d.clearance_mm;
+    const w = bay.type === 'open' ? bay.width_mm : Math.max(bay.w_mm, ...bay.stack.map((m) => m.w_mm)) + 2 * d.clearance_mm;
     const r = { x0: x, x1: x + w, bay };
     x += w + t;
     return r;
