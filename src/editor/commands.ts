@@ -138,13 +138,14 @@ export const COMMANDS: readonly Command[] = [
   },
   {
     id: 'duplicate',
-    label: 'Duplicate',
+    label: 'Duplicate…',
     group: 'Edit',
     shortcuts: [{ key: 'd', mod: true }],
     edits: true,
     enabled: (s) => writable(s) && s.selection.members.length > 0,
-    run: (s) => {
-      // Beside the original, one profile's width plus a gap further along the view's horizontal axis.
+    run: (s, ui) => {
+      // With the editor's dialog: copies at a typed offset (in place by default). Without it, beside the original.
+      if (ui.openDuplicate) return (ui.openDuplicate(), null);
       const d = viewDelta(s.view, 100, 0);
       return change(s, `Duplicate ${countLabel(s)}`, (doc) => copyMembers(doc, s.selection.members, d).doc);
     },

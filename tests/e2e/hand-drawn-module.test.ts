@@ -56,4 +56,26 @@ describe('a module seated on a hand-drawn frame', () => {
     const pct = lines.map((l) => Number(/(\d+) %$/.exec(l)?.[1] ?? 0));
     expect(Math.max(...pct)).toBeGreaterThan(0);
   });
+
+  it('Shift-click adds to the pick; duplicate puts the copies at a typed offset, picked', async () => {
+    await page.getByRole('tab', { name: 'Part' }).click();
+    const back = page.getByRole('button', { name: '← All members' });
+    if (await back.count()) await back.click();
+    const list = page.getByRole('list', { name: 'Members' });
+    await list.getByRole('button', { name: /post-fl/ }).click();
+    await list.getByRole('button', { name: /post-fr/ }).click({ modifiers: ['Shift'] });
+    await expect.poll(() => page.getByText(/^2 members selected$/).count()).toBe(1);
+
+    await page.locator('[data-view="front"]').focus();
+    await page.keyboard.press('Control+d');
+    const x = page.getByTestId('duplicate-x').locator('input');
+    await x.fill('100 mm');
+    await x.press('Enter');
+    // Two copies, 100 mm along x, picked (and the originals not).
+    await expect.poll(() => page.getByText(/^2 members selected$/).count()).toBe(1);
+    const picked = await list.locator('[aria-pressed="true"]').allInnerTexts();
+    expect(picked.join(' ')).not.toMatch(/post-fl\s/);
+    expect(picked).toHaveLength(2);
+    expect(await list.getByRole('button').count()).toBe(8);
+  });
 });
