@@ -4,7 +4,7 @@ import type { Member } from '../model/member';
 import { moduleLabel, type Module } from '../model/module';
 import type { Position } from '../model/position';
 import { bayModuleIds, type Bay, type Run } from '../model/run';
-import { moduleBaseDatum, moduleMidDatum } from '../model/cabinet-run';
+import { moduleDatumIds } from '../model/cabinet-run';
 import { deleteItems } from './edits';
 import { freshId, usedIds } from './ids';
 import { layoutOf } from './layout';
@@ -61,8 +61,8 @@ const refersToBay = (m: Member, bayId: string) => datumsOfMember(m).some((d) => 
 const atBoundary = (m: Member, run: Run, k: number) => datumsOfMember(m).includes(`${run.id}.u${k}`);
 
 /** A bay's rails: members along the run from its start to its end that carry no module of their own. */
-function spanningRails(doc: FrameDocument, run: Run, bay: Bay): Member[] {
-  const own = new Set(bayModuleIds(bay).flatMap((id) => [moduleBaseDatum(id), moduleMidDatum(id)]));
+export function spanningRails(doc: FrameDocument, run: Run, bay: Bay): Member[] {
+  const own = new Set(bayModuleIds(bay).flatMap(moduleDatumIds));
   return doc.members.filter(
     (m) =>
       m.axis === run.axis &&
@@ -182,7 +182,7 @@ export function removeBay(doc: FrameDocument, bayId: string, opts: { keepModules
   if (run.bays.length === 1) return refuse(`${capital(bayWords(run, i))} is the only bay of its run, and a run keeps at least one; delete the run’s members instead.`);
   const layout = layoutOf(doc);
   const held = bayModuleIds(bay);
-  const own = new Set(held.flatMap((id) => [moduleBaseDatum(id), moduleMidDatum(id)]));
+  const own = new Set(held.flatMap(moduleDatumIds));
   const removed = new Set(
     doc.members
       .filter((m) => refersToBay(m, bay.id) || atBoundary(m, run, i + 1) || datumsOfMember(m).some((d) => own.has(d)))
@@ -287,7 +287,7 @@ function withoutModule(bay: Bay, moduleId: string, width_mm: number): Bay {
 export function carryingMembers(doc: FrameDocument, moduleId: string): Member[] {
   const place = placeOfModule(doc, moduleId);
   if (!place) return [];
-  const own = new Set([moduleBaseDatum(moduleId), moduleMidDatum(moduleId)]);
+  const own = new Set(moduleDatumIds(moduleId));
   const rails = new Set(spanningRails(doc, place.run, place.bay).map((m) => m.id));
   const alone = bayModuleIds(place.bay).length === 1;
   return doc.members.filter((m) => {
@@ -336,6 +336,9 @@ export function moveModuleToBay(doc: FrameDocument, moduleId: string, bayId: str
         return c;
       }),
     };
+    // Datums that place its members from the old bay's middle move to the new bay too.
+    const mine = new Set(moduleDatumIds(moduleId));
+    next = { ...next, datums: next.datums.map((d) => (mine.has(d.id) && d.from?.startsWith(`${old}.`) ? { ...d, from: d.from.replace(`${old}.`, `${bayId}.`) } : d)) };
     const width = layout.datums.bays.get(old)?.width_mm ?? 100;
     next = { ...next, runs: next.runs.map((r) => (r.id === from.run.id ? { ...r, bays: r.bays.map((b) => (b.id === old ? withoutModule(b, moduleId, width) : b)) } : r)) };
   }

@@ -75,25 +75,68 @@ export function makeRunFromMembers(doc: FrameDocument, memberIds: readonly strin
   const bays: Bay[] = boundaries.slice(1).map((b, i) => ({ id: freshId(used, 'bay'), width_mm: tidy(b.low - boundaries[i].high) }));
   const notes: string[] = [];
 
-  // The run's datums by value along the row: upright faces first, then bay openings.
-  const faces: { value: number; datum: string }[] = [];
-  boundaries.forEach((b, i) => {
-    faces.push({ value: b.low, datum: `${runId}.u${i}` });
-    faces.push({ value: b.high, datum: i < bays.length ? `${bays[i].id}.start` : `${runId}.end` });
-  });
-  const tie = (v: number): { datum: string; offset_mm: number } | null => {
-    const f = faces.find((x) => Math.abs(x.value - v) <= SAME_MM);
-    if (f) return { datum: f.datum, offset_mm: 0 };
-    const i = boundaries.findIndex((b, j) => j < bays.length && v > b.high && v < boundaries[j + 1].low);
-    return i >= 0 ? { datum: `${bays[i].id}.start`, offset_mm: tidy(v - boundaries[i].high) } : null;
-  };
-
   // What lies within the uprights' reach is tied to the run.
   const reach = {
     min: [0, 1, 2].map((i) => Math.min(...uprights.map((u) => u.box.min[i])) - SAME_MM),
     max: [0, 1, 2].map((i) => Math.max(...uprights.map((u) => u.box.max[i])) + SAME_MM),
   };
-  const within = (b: { min: number[]; max: number[] }) => [0, 1, 2].every((i) => b.min[i] >= reach.min[i] && b.max[i] <= reach.max[i]);
+  const within = (b: { min: readonly number[]; max: readonly number[] }) => [0, 1, 2].every((i) => b.min[i] >= reach.min[i] && b.max[i] <= reach.max[i]);
+  const opening = (v: number) => boundaries.findIndex((b, j) => j < bays.length && v > b.high + SAME_MM && v < boundaries[j + 1].low - SAME_MM);
+  const column = (v: number) => boundaries.findIndex((b) => v >= b.low - SAME_MM && v <= b.high + SAME_MM);
+
+  // Modules in the openings go into their bays, bottom to top.
+  const held = new Map<number, { id: string; z: number; zTop: number; lo: number; hi: number }[]>();
+  for (const g of scene.modules) {
+    if (g.bay !== null) continue;
+    if (!within(g.box)) continue;
+    const mod = doc.modules.find((m) => m.id === g.id);
+    if (!mod) continue;
+    const i = opening((g.box.min[k] + g.box.max[k]) / 2);
+    if (i < 0) {
+      notes.push(`${moduleLabel(mod)} is not in an opening between the uprights; it stands free as before.`);
+      continue;
+    }
+    if (g.box.min[k] < boundaries[i].high - SAME_MM || g.box.max[k] > boundaries[i + 1].low + SAME_MM) {
+      notes.push(`${moduleLabel(mod)} is wider than its opening; it stands free as before.`);
+      continue;
+    }
+    const list = held.get(i) ?? [];
+    list.push({ id: g.id, z: g.box.min[2], zTop: g.box.max[2], lo: g.box.min[k], hi: g.box.max[k] });
+    held.set(i, list);
+  }
+  /** The bay (left or right of boundary c) whose module a member at heights lo…hi stands beside, if any. */
+  const besideModule = (c: number, lo: number, hi: number): 'left' | 'right' | null => {
+    const overlaps = (i: number) => (held.get(i) ?? []).some((x) => Math.min(hi, x.zTop) - Math.max(lo, x.z) > SAME_MM);
+    if (c < bays.length && overlaps(c)) return 'right';
+    if (c > 0 && overlaps(c - 1)) return 'left';
+    return null;
+  };
+
+  // A position inside an opening follows the nearer edge of its bay; one in an upright's column follows the
+  // upright (a rail's end there follows its own bay, so it travels with the bay when bays change places).
+  const tie = (v: number, role: 'start' | 'end' | 'across', zLo: number, zHi: number): { datum: string; offset_mm: number } | null => {
+    const i = opening(v);
+    if (i >= 0) {
+      const lo = boundaries[i].high;
+      const hi = boundaries[i + 1].low;
+      return v - lo <= hi - v ? { datum: `${bays[i].id}.start`, offset_mm: tidy(v - lo) } : { datum: `${bays[i].id}.end`, offset_mm: tidy(v - hi) };
+    }
+    const c = column(v);
+    if (c < 0) return null;
+    const b = boundaries[c];
+    const atHigh = Math.abs(v - b.high) <= SAME_MM;
+    const atLow = Math.abs(v - b.low) <= SAME_MM;
+    if (role === 'start' && atHigh && c < bays.length) return { datum: `${bays[c].id}.start`, offset_mm: 0 };
+    if (role === 'end' && atLow && c > 0) return { datum: `${bays[c - 1].id}.end`, offset_mm: 0 };
+    if (role === 'across') {
+      const side = besideModule(c, zLo, zHi);
+      if (side === 'right') return { datum: `${bays[c].id}.start`, offset_mm: tidy(v - b.high) };
+      if (side === 'left') return { datum: `${bays[c - 1].id}.end`, offset_mm: tidy(v - b.low) };
+    }
+    if (atHigh && c === bays.length) return { datum: `${runId}.end`, offset_mm: 0 };
+    return { datum: `${runId}.u${c}`, offset_mm: tidy(v - b.low) };
+  };
+
   const inRun = new Set(scene.members.filter((m) => within(m.drawn)).map((m) => m.id));
   const boxOf = new Map(scene.members.map((m) => [m.id, m.drawn]));
   let untied = 0;
@@ -103,10 +146,13 @@ export function makeRunFromMembers(doc: FrameDocument, memberIds: readonly strin
     const m = record.get(owner.id);
     if (!box || !m) return p;
     let v: number;
-    if (m.axis === axis) v = p === m.start ? box.min[k] : box.max[k];
-    else v = p.align === 'max' ? box.max[k] : p.align === 'center' ? (box.min[k] + box.max[k]) / 2 : box.min[k];
-    const r = tie(v);
-    if (!r) {
+    let role: 'start' | 'end' | 'across' = 'across';
+    if (m.axis === axis) {
+      role = p === m.start ? 'start' : 'end';
+      v = role === 'start' ? box.min[k] : box.max[k];
+    } else v = p.align === 'max' ? box.max[k] : p.align === 'center' ? (box.min[k] + box.max[k]) / 2 : box.min[k];
+    const r = m.axis === 'z' ? { datum: `${runId}.u${column(v)}`, offset_mm: tidy(v - (boundaries[column(v)]?.low ?? v)) } : tie(v, role, box.min[2], box.max[2]);
+    if (!r || r.datum.endsWith('.u-1')) {
       untied += 1;
       return p;
     }
@@ -119,33 +165,12 @@ export function makeRunFromMembers(doc: FrameDocument, memberIds: readonly strin
   });
   if (untied > 0) notes.push(`${untied} position${untied === 1 ? '' : 's'} outside the openings stay as drawn.`);
 
-  // Modules in the openings go into their bays, bottom to top.
-  const held = new Map<number, { id: string; z: number; lo: number; hi: number }[]>();
-  for (const g of scene.modules) {
-    if (g.bay !== null) continue;
-    if (!within({ min: [...g.box.min], max: [...g.box.max] })) continue;
-    const mod = doc.modules.find((m) => m.id === g.id);
-    if (!mod) continue;
-    const centre = (g.box.min[k] + g.box.max[k]) / 2;
-    const i = boundaries.findIndex((b, j) => j < bays.length && centre > b.high && centre < boundaries[j + 1].low);
-    if (i < 0) {
-      notes.push(`${moduleLabel(mod)} is not in an opening between the uprights; it stands free as before.`);
-      continue;
-    }
-    if (g.box.min[k] < boundaries[i].high - SAME_MM || g.box.max[k] > boundaries[i + 1].low + SAME_MM) {
-      notes.push(`${moduleLabel(mod)} is wider than its opening; it stands free as before.`);
-      continue;
-    }
-    const list = held.get(i) ?? [];
-    list.push({ id: g.id, z: g.box.min[2], lo: g.box.min[k], hi: g.box.max[k] });
-    held.set(i, list);
-  }
   for (const [i, list] of held) {
     list.sort((p, q) => p.z - q.z);
-    const opening = boundaries[i + 1].low - boundaries[i].high;
+    const room = boundaries[i + 1].low - boundaries[i].high;
     const widest = Math.max(...list.map((x) => moduleSizeAlong(doc.modules.find((m) => m.id === x.id) as never, axis)));
     const [first, ...rest] = list;
-    bays[i] = { id: bays[i].id, module: first.id, ...(rest.length > 0 ? { stack: rest.map((x) => x.id) } : {}), clearance_mm: tidy((opening - widest) / 2) };
+    bays[i] = { id: bays[i].id, module: first.id, ...(rest.length > 0 ? { stack: rest.map((x) => x.id) } : {}), clearance_mm: tidy((room - widest) / 2) };
     for (const x of list) {
       const off = tidy((x.lo + x.hi) / 2 - (boundaries[i].high + boundaries[i + 1].low) / 2);
       if (Math.abs(off) > SAME_MM) {

@@ -5,6 +5,7 @@ import type { FrameDocument } from '../model/frame-document';
 import { roleOf } from '../model/member';
 import { checkReferences } from '../model/references';
 import { findBearings } from './bearing';
+import { findClashes } from './clashes';
 import { ai, type Box } from './box';
 import { CAUTIONS, DEFLECTION_NOTE, SAFETY_FACTOR_NOTE, SHOCK_FACTOR_NOTE } from './cautions';
 import { cutList } from './cut-list';
@@ -165,7 +166,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   let governing: (typeof checks)[number] | null = null;
   for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > (governing.utilisation as number))) governing = c;
 
-  const warnings = [...joints.warnings, ...bearingWarnings, ...hardware.warnings, ...loads.warnings];
+  const warnings = [...joints.warnings, ...bearingWarnings, ...findClashes(modules, members, eff), ...hardware.warnings, ...loads.warnings];
   for (const c of checks) {
     if (c.utilisation !== null && c.utilisation > 1) {
       warnings.push({

@@ -8,6 +8,7 @@ export type ReportWarning = {
     | 'end-shared'
     | 'plain-section-fastener'
     | 'module-unsupported'
+    | 'module-clash'
     | 'member-unsupported'
     | 'load-cycle'
     | 'over-utilised'

@@ -5,7 +5,7 @@ import type { DatumInput } from './datum';
 import { CURRENT_SCHEMA_VERSION, frameDocumentSchema, type FrameDocument, type FrameDocumentInput } from './frame-document';
 import { idSchema, nameSchema } from './ids';
 import type { MemberInput } from './member';
-import { bearingSchema, MAX_OPTIONS, moduleKindSchema, moduleOptionSchema, type ModuleInput } from './module';
+import { bearingSchema, DEFAULT_SIDE_GAP_MM, MAX_OPTIONS, moduleKindSchema, moduleOptionSchema, type ModuleInput } from './module';
 import type { PositionInput } from './position';
 import { fieldPath } from './references';
 import { MAX_STACK } from './run';
@@ -109,6 +109,10 @@ const at = (datum: string, align?: 'min' | 'center' | 'max', offset_mm = 0): Pos
 export const moduleBaseDatum = (moduleId: string): string => `${moduleId}-base`;
 /** Datum id of a side-rail module's mid-height (z), where its slide rails run. */
 export const moduleMidDatum = (moduleId: string): string => `${moduleId}-mid`;
+/** Datum ids of a module's sides along the run, for a module narrower than its stack: its bearers follow them. */
+export const moduleSideDatums = (moduleId: string): [string, string] => [`${moduleId}-left`, `${moduleId}-right`];
+/** Every datum a cabinet layout may make for one module. */
+export const moduleDatumIds = (moduleId: string): string[] => [moduleBaseDatum(moduleId), moduleMidDatum(moduleId), ...moduleSideDatums(moduleId)];
 
 /**
  * A cabinet run laid out by reference: an upright pair (front and back) at every bay boundary, rails front and
@@ -158,6 +162,23 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
     member(`${bay.id}-low-b`, 'x', s, e, { y: backY, z: at('seat', 'max') }, `${label}: seat rail, back`);
     const clearance = bay.clearance_mm ?? spec.clearance_mm;
     const held = [...(bay.module ? [bay.module] : []), ...(bay.stack ?? [])];
+    const widest = Math.max(0, ...held.map((m) => m.size.w_mm));
+    /**
+     * Where the members under (or over) a module stand along the run, a quarter profile in from its sides: from
+     * the bay's edges for the widest module of the bay, from the module's own sides (datums that follow its width)
+     * for a narrower one in a stack.
+     */
+    const sidePlaces = (m: CabinetModule): [PositionInput, PositionInput] => {
+      if (m.size.w_mm >= widest) {
+        const inset = clearance + t / 4;
+        return [at(`${bay.id}.start`, 'min', inset), at(`${bay.id}.end`, 'max', -inset)];
+      }
+      const [l, r] = moduleSideDatums(m.id);
+      const name = m.name.trim() || m.id;
+      datums.push({ type: 'datum', id: l, name: `Left side of ${name}`, axis: 'x', from: `${bay.id}.mid`, offset_mm: 0, plus: [{ module: m.id, size: 'w', factor: -0.5 }] });
+      datums.push({ type: 'datum', id: r, name: `Right side of ${name}`, axis: 'x', from: `${bay.id}.mid`, offset_mm: 0, plus: [{ module: m.id, size: 'w', factor: 0.5 }] });
+      return [at(l, 'min', t / 4), at(r, 'max', -t / 4)];
+    };
     // Where the next module up starts: a datum plus the height of the module under it (none at the seat).
     let floor: { datum: string; below: string | null } = { datum: 'seat', below: null };
     held.forEach((m, level) => {
@@ -170,9 +191,9 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
       if (m.bearing === 'hung') {
         // Hangers under the top, across the depth, set in from the bay's sides like bearers; the module's top is
         // at their underside.
-        const inset = clearance + t / 4;
-        member(`${tag}-hanger-l`, 'y', inFront, inBack, { x: at(`${bay.id}.start`, 'min', inset), z: at('top', 'max') }, `${label}: hanger for ${name}, left`);
-        member(`${tag}-hanger-r`, 'y', inFront, inBack, { x: at(`${bay.id}.end`, 'max', -inset), z: at('top', 'max') }, `${label}: hanger for ${name}, right`);
+        const [xl, xr] = sidePlaces(m);
+        member(`${tag}-hanger-l`, 'y', inFront, inBack, { x: xl, z: at('top', 'max') }, `${label}: hanger for ${name}, left`);
+        member(`${tag}-hanger-r`, 'y', inFront, inBack, { x: xr, z: at('top', 'max') }, `${label}: hanger for ${name}, right`);
         z = at('top', 'max', -t);
       } else {
         const room = m.raise_mm ?? (first ? 0 : m.bearing === 'base' ? clearance + t : clearance);
@@ -195,9 +216,9 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
             member(`${tag}-rail-b`, 'x', s, e, { y: backY, z: at(base, 'max') }, `${label}: rail under ${name}, back`);
           }
           // Bearers under the module's sides, set in from its edges by a quarter of the profile.
-          const inset = clearance + t / 4;
-          member(`${tag}-bearer-l`, 'y', inFront, inBack, { x: at(`${bay.id}.start`, 'min', inset), z: at(base, 'max') }, `${label}: bearer${of}, left`);
-          member(`${tag}-bearer-r`, 'y', inFront, inBack, { x: at(`${bay.id}.end`, 'max', -inset), z: at(base, 'max') }, `${label}: bearer${of}, right`);
+          const [xl, xr] = sidePlaces(m);
+          member(`${tag}-bearer-l`, 'y', inFront, inBack, { x: xl, z: at(base, 'max') }, `${label}: bearer${of}, left`);
+          member(`${tag}-bearer-r`, 'y', inFront, inBack, { x: xr, z: at(base, 'max') }, `${label}: bearer${of}, right`);
         } else {
           const mid = moduleMidDatum(m.id);
           datums.push({ type: 'datum', id: mid, name: `Slides of ${name}`, axis: 'z', from: base, offset_mm: 0, plus: [{ module: m.id, size: 'h', factor: 0.5 }] });
@@ -218,6 +239,11 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
         ...(m.litres !== undefined ? { litres: m.litres } : {}),
         ...(m.options ? { options: m.options } : {}),
         bearing: m.bearing,
+        // Its slides span the gap to the rails at the bay's edges (the clearance, more beside a narrower module
+        // in a stack, on packers); a wider gap than slides usually take is still the way this module bears.
+        ...(m.bearing === 'side-rails' && clearance + (widest - m.size.w_mm) / 2 > DEFAULT_SIDE_GAP_MM
+          ? { sideGap_mm: Math.round((clearance + (widest - m.size.w_mm) / 2) * 1000) / 1000 + 1 }
+          : {}),
         place: { y: inFront, z },
       });
     });
