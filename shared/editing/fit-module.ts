@@ -3,7 +3,9 @@ import type { FrameDocument } from '../model/frame-document';
 import { DEFAULT_SIDE_GAP_MM, moduleLabel, moduleSchema, type Module, type ModuleInput } from '../model/module';
 import type { Member } from '../model/member';
 import type { Position } from '../model/position';
-import { addBay, findBay, moveModuleToBay, placeOfModule, spanningRails, type BayWhere } from './bays';
+import { addBay, carryingMembers, findBay, moveModuleOutOfRun, moveModuleToBay, placeOfModule, spanningRails, type BayWhere } from './bays';
+import { deleteItems } from './edits';
+import { bayModuleIds } from '../model/run';
 import { freshId, usedIds } from './ids';
 import { layoutOf } from './layout';
 import { bayWords, capital, refuse, type EditOutcome } from './outcome';
@@ -160,9 +162,22 @@ export function addModuleToRun(
 }
 
 /**
- * Move a module into an open bay, whichever way it stands now: from another bay its carrying members go with it
- * (moveModuleToBay); standing free it gets members made from the bay's rails (fitModuleInBay).
+ * Move a module into an open bay, whichever way it stands now: from another bay of the same run its carrying
+ * members go with it (moveModuleToBay); from another run, or standing free, it gets members made from the new
+ * bay's rails (fitModuleInBay), and the members that carried it in another run go.
  */
 export function putModuleInBay(doc: FrameDocument, moduleId: string, bayId: string): EditOutcome {
-  return placeOfModule(doc, moduleId) ? moveModuleToBay(doc, moduleId, bayId) : fitModuleInBay(doc, moduleId, bayId);
+  const from = placeOfModule(doc, moduleId);
+  if (!from) return fitModuleInBay(doc, moduleId, bayId);
+  const target = findBay(doc, bayId);
+  if (!target || target.run.id === from.run.id || bayModuleIds(from.bay).length > 1) return moveModuleToBay(doc, moduleId, bayId);
+  if (bayModuleIds(target.bay).length > 0) return moveModuleToBay(doc, moduleId, bayId);
+  const carriers = new Set(carryingMembers(doc, moduleId).map((m) => m.id));
+  const out = moveModuleOutOfRun(doc, moduleId);
+  if (!out.ok) return out;
+  const bare = deleteItems(out.doc, layoutOf(out.doc).scene, carriers, new Set());
+  const fitted = fitModuleInBay(bare, moduleId, bayId);
+  if (!fitted.ok) return fitted;
+  const mod = doc.modules.find((m) => m.id === moduleId) as Module;
+  return { ok: true, doc: fitted.doc, label: `Move ${moduleLabel(mod)} into ${bayWords(target.run, target.index)}` };
 }

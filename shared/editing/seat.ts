@@ -58,7 +58,9 @@ export function snapModule(scene: Scene, moduleId: string, box: Box, tol_mm: num
     const others = [0, 1, 2].filter((i) => i !== k);
     let best: ModuleSnap | null = null;
     const consider = (target: Box, kind: 'member' | 'module', id: string, name: string) => {
-      if (others.some((i) => overlapOn(box, target, i) <= OVER_MM)) return;
+      // Base and top need the target under or over the module; a side may line up with a face a little in
+      // front or behind it (an upright at the corner of its opening), so near is enough across, height must overlap.
+      if (axis === 'z' ? others.some((i) => overlapOn(box, target, i) <= OVER_MM) : overlapOn(box, target, 2) <= OVER_MM || others.some((i) => i !== 2 && overlapOn(box, target, i) < -tol_mm)) return;
       // The module's low face onto the target's high face, and its high face onto the target's low face.
       for (const side of ['min', 'max'] as const) {
         const face = side === 'min' ? target.max[k] : target.min[k];

@@ -228,3 +228,43 @@ describe('adding a module to a run', () => {
     }
   });
 });
+
+describe('adding a cabinet run to an existing frame', () => {
+  it('puts the whole layout beside what is there, with its own datums and ids, every module seated', async () => {
+    const { addCabinetRun } = await import('@shared/editing/cabinet');
+    const { galleySpec } = await import('./cabinet-fixtures');
+    const doc = galleyDoc();
+    const out = ok(addCabinetRun(doc, galleySpec(), { x: 2500, y: 0, z: 0 }));
+    const next = parseFrameDocument(out.doc);
+    expect(next.runs).toHaveLength(2);
+    expect(next.members).toHaveLength(doc.members.length * 2);
+    const r = computeReport(next);
+    const r0 = computeReport(doc);
+    // The copy stands 2500 mm to the right: its first upright at 2500, its tank at the tank's height.
+    expect(member(r, `${out.runId}-u0-f`).min_mm.x).toBe(2500);
+    const tank = r.modules.find((m) => m.id !== 'tank' && m.name === 'Fresh water tank 25 L')!;
+    expect(tank.min_mm.z).toBe(r0.modules.find((m) => m.id === 'tank')!.min_mm.z);
+    for (const m of r.modules) expect(m.bears_on.length, m.id).toBeGreaterThan(0);
+    const bad = addCabinetRun(doc, { ...galleySpec(), depth_mm: -1 });
+    expect(bad.ok ? '' : bad.reason).toMatch(/^depth_mm: must be more than 0/);
+  });
+});
+
+describe('moving a module to another run', () => {
+  it('leaves its old carrying members behind and gets new ones from the new bay’s rails', async () => {
+    const { addCabinetRun } = await import('@shared/editing/cabinet');
+    const { putModuleInBay } = await import('@shared/editing/fit-module');
+    const doc = coolerAndOpenBay();
+    const two = ok(addCabinetRun(doc, { name: 'Second', profile: '30x30-s8', depth_mm: 600, height_mm: 700, seat_mm: 200, clearance_mm: 10, bays: [{ id: 'bay-c', width_mm: 400 }] }, { x: 2000, y: 0, z: 0 }));
+    const open = two.doc.runs[1].bays[0].id;
+    const out = ok(putModuleInBay(two.doc, 'cooler', open));
+    const r = computeReport(parseFrameDocument(out.doc));
+    const cooler = r.modules.find((m) => m.id === 'cooler')!;
+    expect(cooler.bay_id).toBe(open);
+    // On the second cabinet's seat (200) now, on two new bearers; the old ones are gone.
+    expect(cooler.min_mm.z).toBe(200);
+    expect(cooler.bears_on).toHaveLength(2);
+    expect(r.members.map((m) => m.id)).not.toContain('bay-a-bearer-l');
+    expect(r.warnings.filter((w) => w.code === 'module-unsupported')).toEqual([]);
+  });
+});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { trySwapModules } from '@shared/editing/bays';
+import { addBay, removeBay, trySwapModules } from '@shared/editing/bays';
 import { layoutOf } from '@shared/editing/layout';
 import { makeRunFromMembers } from '@shared/editing/make-run';
 import type { EditOutcome } from '@shared/editing/outcome';
@@ -102,6 +102,25 @@ describe('making bays from hand-drawn uprights', () => {
     expect(member(r, 'u2b').min_mm.x).toBe(900);
     for (const m of r.modules) expect(m.bears_on.length, m.id).toBe(2);
     expect(swapped.label).toBe('Swap “Camp fridge” and “Water tank”');
+  });
+
+  it('then takes bay edits like a layout: a bay added at the end gets uprights and rails, a removed one takes its own', () => {
+    const doc = handDrawn([0, 500, 900], [fridge(70)]);
+    const run = ok(makeRunFromMembers(doc, doc.members.map((m) => m.id)));
+    const r0 = computeReport(run.doc);
+    const added = ok(addBay(run.doc, run.runId, 'end'));
+    const r1 = computeReport(parseFrameDocument(added.doc));
+    const fresh = r1.members.filter((m) => !r0.members.some((o) => o.id === m.id));
+    // Copies of the last boundary's two uprights and of the neighbour's four rails (its bearers carry nothing).
+    expect(fresh.map((m) => m.role).sort()).toEqual(['rail', 'rail', 'rail', 'rail', 'upright', 'upright']);
+    // The neighbour's opening was 900 − 540 = 360; the new uprights stand 360 + 40 beyond the last ones.
+    for (const m of fresh.filter((x) => x.role === 'upright')) expect(m.min_mm.x).toBe(900 + 40 + 360);
+    const removed = ok(removeBay(run.doc, run.doc.runs[0].bays[0].id));
+    const r2 = computeReport(parseFrameDocument(removed.doc));
+    // Bay 1 goes with its fridge, its rails and bearers and the middle uprights; the second opening closes up.
+    expect(removed.removedMembers.sort()).toEqual(['b0l', 'b0r', 'r0b-low', 'r0b-top', 'r0f-low', 'r0f-top', 'u1b', 'u1f']);
+    expect(r2.modules).toEqual([]);
+    expect(member(r2, 'u2f').min_mm.x).toBe(40 + 360);
   });
 
   it('says what it leaves as it was, and refuses a row that cannot be a run', () => {
