@@ -1,10 +1,11 @@
 import { diffDocuments, type Change } from '@shared/editing/change';
-import { bayOfModule, copyMembers, deleteItems, mirrorCopy, moveMembers, moveModules, shiftModule, swapModules } from '@shared/editing/edits';
+import { bayOfModule, copyMembers, deleteItems, mirrorCopy, moveMembers, moveModules, shiftModule } from '@shared/editing/edits';
 import type { Scene } from '@shared/editing/scene';
 import { viewDelta, type ViewDef, type ViewId } from '@shared/editing/views';
 import { AXIS_INDEX } from '@shared/model/axis';
 import type { FrameDocument } from '@shared/model/frame-document';
 import type { Selection } from '@/stores/document';
+import { swapPicked } from './module-moves';
 import type { ToolId } from './tools/tool';
 
 /** What commands read: the document, the scene, the selection and the view they act in. */
@@ -30,7 +31,11 @@ export type CommandUi = {
   setTool(id: ToolId): void;
   setView(id: ViewId): void;
   openArray(): void;
+  /** Open the duplicate dialog (copy at a typed offset). */
+  openDuplicate?(): void;
   select(next: Selection): void;
+  /** Say in plain words why a command did nothing (a swap with one module picked, say). */
+  refuse?(label: string, reason: string): void;
 };
 
 export type Shortcut = { key: string; mod?: boolean; shift?: boolean; alt?: boolean };
@@ -133,13 +138,14 @@ export const COMMANDS: readonly Command[] = [
   },
   {
     id: 'duplicate',
-    label: 'Duplicate',
+    label: 'Duplicate…',
     group: 'Edit',
     shortcuts: [{ key: 'd', mod: true }],
     edits: true,
     enabled: (s) => writable(s) && s.selection.members.length > 0,
-    run: (s) => {
-      // Beside the original, one profile's width plus a gap further along the view's horizontal axis.
+    run: (s, ui) => {
+      // With the editor's dialog: copies at a typed offset (in place by default). Without it, beside the original.
+      if (ui.openDuplicate) return (ui.openDuplicate(), null);
       const d = viewDelta(s.view, 100, 0);
       return change(s, `Duplicate ${countLabel(s)}`, (doc) => copyMembers(doc, s.selection.members, d).doc);
     },
@@ -183,11 +189,16 @@ export const COMMANDS: readonly Command[] = [
     shortcuts: [{ key: 's' }],
     edits: true,
     summarise: true,
-    enabled: (s) =>
-      writable(s) && s.selection.modules.length === 2 && s.selection.modules.every((id) => s.doc !== null && bayOfModule(s.doc, id) !== null),
-    run: (s) => {
-      const [a, b] = s.selection.modules;
-      return change(s, `Swap ${moduleName(s, a)} and ${moduleName(s, b)}`, (doc) => swapModules(doc, a, b));
+    // Always offered: with the wrong things picked it says what to pick rather than doing nothing silently.
+    enabled: (s) => writable(s) && s.scene.modules.length > 0,
+    run: (s, ui) => {
+      if (!s.doc) return null;
+      const r = swapPicked(s.doc, s.scene, s.selection.modules);
+      if (!r.ok) {
+        ui.refuse?.('Swap modules', r.reason);
+        return null;
+      }
+      return diffDocuments(s.doc, r.doc, r.label);
     },
   },
   {

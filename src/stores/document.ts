@@ -236,6 +236,10 @@ export const useDocumentStore = defineStore('document', () => {
   function dismissSummary(): void {
     summary.value = null;
   }
+  /** Show why something the builder asked for was not done (nothing changes). */
+  function refuse(label: string, message: string): void {
+    refusal.value = { label, message, field: null };
+  }
   function dismissRefusal(): void {
     refusal.value = null;
   }
@@ -271,5 +275,6 @@ export const useDocumentStore = defineStore('document', () => {
     keepMine,
     dismissSummary,
     dismissRefusal,
+    refuse,
   };
 });

@@ -16,6 +16,8 @@ export type OverlayOptions = {
   scene: Scene;
   selectedMembers: readonly ViewItem[];
   selectedModules: readonly ViewItem[];
+  /** Members the selected modules bear on, marked so the builder sees what carries them. */
+  bearingMembers?: readonly ViewItem[];
   overlay: OverlayState;
   /** Show end handles (one member selected, editable). */
   handles: boolean;
@@ -104,6 +106,12 @@ export function drawOverlay(ctx: CanvasRenderingContext2D, o: OverlayOptions): v
 
   if (overlay.hover && !o.compact) outlineRect(ctx, cam, overlay.hover, PALETTE.selection, 1, [3, 2]);
 
+  for (const item of o.bearingMembers ?? []) {
+    ctx.fillStyle = PALETTE.swapTarget;
+    const s = screenRect(cam, item);
+    ctx.fillRect(s.x, s.y, s.w, s.h);
+    outlineRect(ctx, cam, item, PALETTE.snap, 2);
+  }
   for (const item of o.selectedModules) {
     ctx.fillStyle = PALETTE.selectionFill;
     const s = screenRect(cam, item);

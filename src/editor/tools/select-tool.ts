@@ -1,10 +1,11 @@
 import { diffDocuments } from '@shared/editing/change';
-import { moveMembers, moveModules, stretchMember, swapModules } from '@shared/editing/edits';
+import { moveMembers, moveModules, stretchMember } from '@shared/editing/edits';
 import { boxSelect, hitEndHandle, hitItem } from '@shared/editing/hit-test';
 import type { SceneMember, ViewItem } from '@shared/editing/scene';
 import { snapMove, snapValue, type SnapTarget } from '@shared/editing/snap';
 import { screenAxis, viewDelta, type Rect2 } from '@shared/editing/views';
 import { HANDLE_PX } from '../draw/overlay';
+import { swapPicked } from '../module-moves';
 import type { SnapCue } from '../overlay';
 import { clearOverlay, dragged, type Phase, type PointerInput, type Tool, type ToolContext } from './tool';
 
@@ -140,15 +141,29 @@ export function createSelectTool(): Tool {
           break;
         }
         case 'module': {
-          const dh = p.h - g.start.h;
-          const dv = p.v - g.start.v;
           const dragging = g.item;
           const over = ctx.items.modules.find((i) => i.id !== dragging.id && p.h >= i.x0 && p.h <= i.x1 && p.v >= i.y0 && p.v <= i.y1);
-          const swappable = over && g.inBay && ctx.scene.modules[over.index].bay !== null;
-          result = { dh, dv, swapWith: swappable ? over.id : null };
+          let dh = p.h - g.start.h;
+          let dv = p.v - g.start.v;
+          if (!over) {
+            // A module's base, sides and top snap to member faces and other modules, like a member's edges do.
+            const own = `${ctx.scene.modules[dragging.index].name} edge`;
+            const all = ctx.targets(new Set());
+            const th = all.h.filter((t) => t.label !== own);
+            const tv = all.v.filter((t) => t.label !== own);
+            // Along a run the bay places the module: only the cross axes snap.
+            const sh = g.inBay && ctx.scene.modules[dragging.index].run !== null ? { delta: dh, target: null } : snapMove(th, [dragging.x0, dragging.x1], dh, tol, grid);
+            const sv = snapMove(tv, [dragging.y0, dragging.y1], dv, tol, grid);
+            dh = sh.delta;
+            dv = sv.delta;
+            if (sh.target) cues.push({ axis: 'h', target: sh.target, h: sh.target.value, v: p.v });
+            if (sv.target) cues.push({ axis: 'v', target: sv.target, h: p.h, v: sv.target.value });
+          }
+          result = { dh, dv, swapWith: over ? over.id : null };
           o.ghost = [{ x0: g.item.x0 + dh, x1: g.item.x1 + dh, y0: g.item.y0 + dv, y1: g.item.y1 + dv }];
-          o.swapTarget = swappable ? over : null;
-          o.note = swappable ? `Swap with ${ctx.scene.modules[over.index].name}` : g.inBay ? 'Drop on another module to swap' : null;
+          o.swapTarget = over ?? null;
+          const named = cues.find((c) => c.target.kind !== 'grid');
+          o.note = over ? `Swap with ${ctx.scene.modules[over.index].name}` : named ? `${named.target.label}` : g.inBay ? 'Drop on another module to swap' : null;
           break;
         }
       }
@@ -199,8 +214,9 @@ export function createSelectTool(): Tool {
         case 'module': {
           const m = ctx.scene.modules[gesture.item.index];
           if (result.swapWith) {
-            const other = ctx.scene.modules.find((x) => x.id === result.swapWith);
-            ctx.edit(`Swap ${m.name} and ${other?.name ?? result.swapWith}`, (doc) => swapModules(doc, m.id, result.swapWith as string), { summarise: true });
+            const r = swapPicked(ctx.doc, ctx.scene, [m.id, result.swapWith]);
+            if (r.ok) ctx.apply(diffDocuments(ctx.doc, r.doc, r.label), { summarise: true });
+            else ctx.refuse?.('Swap modules', r.reason);
             return;
           }
           const d = viewDelta(ctx.view, result.dh, result.dv);

@@ -31,6 +31,8 @@ export type ToolContext = {
   select(next: Selection): void;
   apply(change: Change, opts?: ApplyOptions): boolean;
   edit(label: string, f: (d: FrameDocument) => FrameDocument, opts?: ApplyOptions): boolean;
+  /** Say why a gesture changed nothing. */
+  refuse?(label: string, reason: string): void;
   /** The profile new members are drawn in. */
   profile: string;
   /** Where a member drawn in this view sits on the depth axis (its low face, mm). */
