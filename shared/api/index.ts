@@ -6,3 +6,5 @@ export * from './auth';
 export * from './workshops';
 export * from './projects';
 export * from './frames';
+export * from './invitations';
+export * from './sharing';

@@ -148,7 +148,17 @@ export const offcutParamsSchema = z.object({ workshopId: idSchema, offcutId: idS
 
 export const ATTACHMENT_TYPES = ['image/jpeg', 'image/png', 'image/webp', 'application/pdf'] as const;
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
-export type AttachmentView = { id: string; filename: string; contentType: string; size: number; createdAt: string; uploadedBy: { id: string; name: string } | null };
+export type AttachmentView = {
+  id: string;
+  filename: string;
+  contentType: string;
+  size: number;
+  createdAt: string;
+  uploadedBy: { id: string; name: string } | null;
+  /** Shown to the project's clients and on its share links. */
+  sharedWithClient: boolean;
+};
+export const updateAttachmentRequestSchema = z.object({ sharedWithClient: z.boolean({ message: 'Must be true or false' }) });
 export const attachmentParamsSchema = z.object({ attachmentId: idSchema });
 
 // ----- outbox (local test mail server) -----
