@@ -234,7 +234,7 @@ describe('a client of one project', () => {
 
   it('members still get the shop documents, with the prices and suppliers they are for', async () => {
     const viewer = w.clients.get('viewer')!;
-    const pdf = await viewer.get(`/api/frames/${ids.FA}/shop/saw-list.pdf`).buffer(true).parse(binary).expect(200);
+    const pdf = await viewer.get(`/api/frames/${ids.FA}/shop/saw-list.pdf`).buffer(true).parse(binary as never).expect(200);
     expect((await pdfText(pdf.body as Buffer)).text.length).toBeGreaterThan(50);
     expect((await viewer.get(`/api/workshops/${ids.W}/suppliers`).expect(200)).body[0].name).toBe('Quayside Alloys');
   });
