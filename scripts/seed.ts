@@ -1,4 +1,5 @@
-// Demo data for a first run: an invented van-conversion workshop with one person per role, one project and
+// Demo data for a first run: an invented van-conversion workshop with one person per role (the client let into
+// the demo project only), one project and
 // one frame. Runs only when the demo workshop does not exist yet, so running it again changes nothing.
 //   tsx scripts/seed.ts        (reads DATABASE_URL through server/config.ts)
 import { pathToFileURL } from 'node:url';
@@ -25,6 +26,7 @@ export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] 
   { email: 'dana@slotwright.test', name: 'Dana Whitlock', role: 'owner' },
   { email: 'rui@slotwright.test', name: 'Rui Santos', role: 'designer' },
   { email: 'sam@slotwright.test', name: 'Sam Keller', role: 'cutter' },
+  { email: 'jo@slotwright.test', name: 'Jo Park', role: 'viewer' },
   { email: 'lee@slotwright.test', name: 'Lee Marsh', role: 'client' },
 ];
 
