@@ -72,7 +72,16 @@ export const orderStatusPatchSchema = z.object({ status: z.literal('received') }
 export const orderParamsSchema = z.object({ orderId: idSchema });
 
 /** What was ordered, frozen when the order was made. */
-export type OrderContents = { meta: ShopMeta; order: OrderList; text: string; supplierName: string; supplierEmail: string };
+export type OrderContents = {
+  meta: ShopMeta;
+  order: OrderList;
+  /** The shop's view: the chosen way of buying and the other for comparison. */
+  text: string;
+  /** What the e-mail to the supplier says: the chosen way only (absent on orders made before it was kept). */
+  supplierText?: string;
+  supplierName: string;
+  supplierEmail: string;
+};
 
 export type OrderSummary = {
   id: string;

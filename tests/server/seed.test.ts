@@ -21,7 +21,7 @@ describe('demo seed', () => {
     expect(await seedDemoData(ctx.orm)).toBe(false);
     const em = ctx.orm.em.fork();
     expect(await em.count(Workshop, { name: DEMO_WORKSHOP })).toBe(1);
-    expect(await em.count(User, {})).toBe(4);
+    expect(await em.count(User, {})).toBe(DEMO_USERS.length);
     expect(await em.count(Frame, {})).toBe(1);
   });
 
