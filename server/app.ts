@@ -24,6 +24,7 @@ import { suppliersRouter } from './modules/suppliers/suppliers.routes';
 import { plannerRouter } from './modules/planner/planner.routes';
 import { invitationsRouter } from './modules/invitations/invitations.routes';
 import { sharingRouter } from './modules/sharing/sharing.routes';
+import { activityRouter } from './modules/activity/activity.routes';
 
 export interface Services {
   orm: Orm;
@@ -100,6 +101,7 @@ export function createApp(services: Services): Express {
   api.use(plannerRouter());
   api.use(invitationsRouter(orm, config));
   api.use(sharingRouter(orm, config));
+  api.use(activityRouter(orm));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

@@ -8,3 +8,4 @@ export * from './projects';
 export * from './frames';
 export * from './invitations';
 export * from './sharing';
+export * from './activity';

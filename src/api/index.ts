@@ -3,7 +3,7 @@ import { createAuthApi } from './auth';
 import { createFramesApi } from './frames';
 import type { Http } from './http';
 import { createMembersApi } from './members';
-import { createInvitationsApi, createSharingApi } from './invitations';
+import { createActivityApi, createInvitationsApi, createSharingApi } from './invitations';
 import { createProjectsApi } from './projects';
 import { createWorkshopsApi } from './workshops';
 
@@ -16,6 +16,7 @@ export function createApi(http: Http) {
     frames: createFramesApi(http),
     invitations: createInvitationsApi(http),
     sharing: createSharingApi(http),
+    activity: createActivityApi(http),
   };
 }
 export type Api = ReturnType<typeof createApi>;

@@ -17,6 +17,7 @@ import {
   type SharedProject,
   type ShareLink,
 } from '@shared/api';
+import { activityEntrySchema, type ActivityEntry } from '@shared/api';
 import type { Http } from './http';
 
 const enc = encodeURIComponent;
@@ -40,5 +41,11 @@ export function createSharingApi(http: Http) {
     createLink: (projectId: string, days: number): Promise<CreatedShareLink> => http.post(`/projects/${enc(projectId)}/share-links`, { days }, createdShareLinkSchema),
     revokeLink: (id: string): Promise<void> => http.delete(`/share-links/${enc(id)}`, null),
     shared: (token: string): Promise<SharedProject> => http.get(`/shared/${enc(token)}`, sharedProjectSchema),
+  };
+}
+
+export function createActivityApi(http: Http) {
+  return {
+    list: (projectId: string): Promise<ActivityEntry[]> => http.get(`/projects/${enc(projectId)}/activity`, z.array(activityEntrySchema)),
   };
 }

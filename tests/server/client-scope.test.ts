@@ -157,6 +157,7 @@ const REFUSED: Record<string, Call[]> = {
   'GET /api/projects/:projectId/share-links': [['get', (i) => `/api/projects/${i.A}/share-links`]],
   'POST /api/projects/:projectId/share-links': [['post', (i) => `/api/projects/${i.A}/share-links`, { days: 30 }]],
   'DELETE /api/share-links/:shareLinkId': [['delete', (i) => `/api/share-links/${i.shareLink}`]],
+  'GET /api/projects/:projectId/activity': [['get', (i) => `/api/projects/${i.A}/activity`]],
 };
 
 // Routes that do not depend on the caller's workshop (signing in and out, tokens from e-mails, the planner,

@@ -20,6 +20,7 @@ import { ProjectClient } from '../access/project-client.entity';
 import { startSignedInSession } from '../auth/auth.routes';
 import { toUserDto } from '../auth/auth.service';
 import { Invitation as InvitationRow } from './invitation.entity';
+import { recordActivity } from '../activity/activity.service';
 import { acceptInvitation, invite, listInvitations, previewInvitation, revokeInvitation } from './invitations.service';
 
 export function invitationsRouter(orm: Orm, config: Config): Router {
@@ -78,8 +79,10 @@ export function invitationsRouter(orm: Orm, config: Config): Router {
   router.delete('/projects/:projectId/clients/:userId', async (req, res) => {
     const { projectId, userId } = parseInput(projectClientParamsSchema, req.params, 'params');
     await authorizeProject(orm.em, currentUserId(req), projectId, 'members.manage');
-    const n = await orm.em.nativeDelete(ProjectClient, { project: projectId, user: userId });
-    if (!n) throw new NotFoundError('Client');
+    const client = await orm.em.findOne(ProjectClient, { project: projectId, user: userId }, { populate: ['user'] });
+    if (!client) throw new NotFoundError('Client');
+    await orm.em.nativeDelete(ProjectClient, { id: client.id });
+    await recordActivity(orm.em, { projectId, userId: currentUserId(req), kind: 'client.removed', subject: client.user.email });
     res.status(204).end();
   });
 

@@ -1,3 +1,4 @@
+import { recordActivity } from '../activity/activity.service';
 import { LockMode, type EntityManager } from '@mikro-orm/postgresql';
 import type { Invitation as InvitationDto, InvitationPreview, InviteRequest } from '@shared/api/invitations';
 import type { Role } from '@shared/api/roles';
@@ -109,6 +110,7 @@ export async function invite(
     await em.nativeDelete(Invitation, { id: inv.id });
     throw new HttpError('unavailable', err instanceof Error ? err.message : 'The invitation could not be mailed');
   }
+  for (const p of projectIds) await recordActivity(em, { projectId: p, userId: inviterId, kind: 'client.invited', subject: inv.email });
   return toDto(em, inv);
 }
 

@@ -1,3 +1,4 @@
+import { recordActivity } from '../activity/activity.service';
 import { randomBytes } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { OrderContents, OrderDetail, OrderSummary } from '@shared/api/shop';
@@ -128,6 +129,8 @@ export async function sendOrder(em: EntityManager, orderId: string, userId: stri
       attachments: [{ filename: `order-${o.reference}.pdf`, content: pdf, contentType: 'application/pdf' }],
     });
     await em.nativeUpdate(Order, { id: orderId, status: 'sending' }, { status: 'sent', sentAt: new Date(), sentBy: userId, sentTo: to, messageId: sent.messageId });
+    const frame = o.frame ? await em.findOne(Frame, { id: o.frame.id }, { fields: ['project'] }) : null;
+    if (frame) await recordActivity(em, { projectId: frame.project.id, userId, kind: 'order.sent', subject: `${o.reference} to ${o.contents.supplierName}` });
   } catch (err) {
     const reason = err instanceof Error ? err.message : String(err);
     await em.nativeUpdate(Order, { id: orderId, status: 'sending' }, { status: 'draft', sendError: reason });

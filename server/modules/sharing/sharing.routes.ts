@@ -16,6 +16,7 @@ import { Attachment } from '../attachments/attachment.entity';
 import { Frame } from '../frames/frame.entity';
 import { User } from '../users/user.entity';
 import { ShareLink, type ShareLinkEntity } from './share-link.entity';
+import { recordActivity } from '../activity/activity.service';
 
 // Read-only links to a project for people without an account. What a link shows is what a client of the
 // project sees: the frames' designs and the files shared with clients, nothing of the shop.
@@ -52,6 +53,7 @@ export function sharingRouter(orm: Orm, config: Config): Router {
     });
     await orm.em.flush();
     await orm.em.populate(link, ['createdBy']);
+    await recordActivity(orm.em, { projectId, userId, kind: 'link.made', subject: `valid ${days} day${days === 1 ? '' : 's'}` });
     res.status(201).json({ ...view(link), token, url: `${config.appUrl}/shared/${token}` } satisfies CreatedShareLink);
   });
 
@@ -60,6 +62,8 @@ export function sharingRouter(orm: Orm, config: Config): Router {
     const link = await orm.em.findOne(ShareLink, { id: shareLinkId });
     if (!link) throw new NotFoundError('Share link');
     await authorizeProject(orm.em, currentUserId(req), link.project.id, 'project.write');
+    const userId = currentUserId(req);
+    if (!link.revokedAt) await recordActivity(orm.em, { projectId: link.project.id, userId, kind: 'link.revoked', subject: '' });
     link.revokedAt ??= new Date();
     await orm.em.flush();
     res.status(204).end();
