@@ -1,4 +1,5 @@
-// Demo data for a first run: an invented van-conversion workshop with one person per role, one project and
+// Demo data for a first run: an invented van-conversion workshop with one person per role (the client let into
+// the demo project only), one project and
 // one frame. Runs only when the demo workshop does not exist yet, so running it again changes nothing.
 //   tsx scripts/seed.ts        (reads DATABASE_URL through server/config.ts)
 import { pathToFileURL } from 'node:url';
@@ -14,6 +15,7 @@ import { Project } from '../server/modules/projects/project.entity';
 import { User, type UserEntity } from '../server/modules/users/user.entity';
 import { Membership } from '../server/modules/workshops/membership.entity';
 import { Workshop } from '../server/modules/workshops/workshop.entity';
+import { ProjectClient } from '../server/modules/access/project-client.entity';
 
 export const DEMO_WORKSHOP = 'Harbour Lane Van Works';
 export const DEMO_PASSWORD = 'slotwright-demo';
@@ -24,7 +26,8 @@ export const DEMO_USERS: readonly { email: string; name: string; role: Role }[] 
   { email: 'dana@slotwright.test', name: 'Dana Whitlock', role: 'owner' },
   { email: 'rui@slotwright.test', name: 'Rui Santos', role: 'designer' },
   { email: 'sam@slotwright.test', name: 'Sam Keller', role: 'cutter' },
-  { email: 'lee@slotwright.test', name: 'Lee Marsh', role: 'viewer' },
+  { email: 'jo@slotwright.test', name: 'Jo Park', role: 'viewer' },
+  { email: 'lee@slotwright.test', name: 'Lee Marsh', role: 'client' },
 ];
 
 /** The demo frame's document: the engine's invented rear kitchen pod (shared/model/demo-frame.ts). */
@@ -42,7 +45,8 @@ export async function seedDemoData(orm: Orm): Promise<boolean> {
     for (const d of DEMO_USERS) {
       // Someone may already have signed up with a demo address; they join the workshop as they are.
       const user = (await em.findOne(User, { email: d.email })) ?? em.create(User, { email: d.email, name: d.name, passwordHash: hash });
-      em.create(Membership, { workshop, user, role: d.role });
+      // The client is let into the demo project only, not into the workshop.
+      if (d.role !== 'client') em.create(Membership, { workshop, user, role: d.role });
       users.set(d.role, user);
     }
     const project = em.create(Project, {
@@ -51,6 +55,8 @@ export async function seedDemoData(orm: Orm): Promise<boolean> {
       client: 'Lee Marsh',
       notes: 'Pod behind the rear doors: pantry pull-out, compressor cooler, 30 L fresh water tank and a cooktop drawer. Invented demo job.',
     });
+    const client = users.get('client');
+    if (client) em.create(ProjectClient, { project, user: client });
     const { document, memberCount } = checkFrameDocument(demoFrameJson());
     em.create(Frame, {
       project,

@@ -22,6 +22,9 @@ import { outboxRouter } from './modules/outbox/outbox.routes';
 import { stockRouter } from './modules/stock/stock.routes';
 import { suppliersRouter } from './modules/suppliers/suppliers.routes';
 import { plannerRouter } from './modules/planner/planner.routes';
+import { invitationsRouter } from './modules/invitations/invitations.routes';
+import { sharingRouter } from './modules/sharing/sharing.routes';
+import { activityRouter } from './modules/activity/activity.routes';
 
 export interface Services {
   orm: Orm;
@@ -96,6 +99,9 @@ export function createApp(services: Services): Express {
   api.use(attachmentsRouter(orm));
   api.use(outboxRouter(orm, config));
   api.use(plannerRouter());
+  api.use(invitationsRouter(orm, config));
+  api.use(sharingRouter(orm, config));
+  api.use(activityRouter(orm));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

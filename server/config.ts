@@ -37,6 +37,11 @@ const envSchema = z.object({
   SMTP_PASS: z.string().optional(),
   SMTP_FROM: z.string().min(3).default('Slotwright <no-reply@slotwright.test>'),
   MAIL_FAKE_DIR: z.string().default('.data/mail-fake'),
+  // Where people open the app: the start of every link in an invitation or reset e-mail. Taken from here and
+  // never from the request's Host header, which a caller could set to their own site.
+  APP_URL: z.url({ message: 'APP_URL must be a URL like https://slotwright.example.com' }).optional(),
+  INVITATION_DAYS: z.coerce.number().positive().max(90).default(7),
+  RESET_MINUTES: z.coerce.number().positive().max(24 * 60).default(60),
 });
 
 export interface Config {
@@ -59,6 +64,10 @@ export interface Config {
   dbPoolMax: number;
   logSql: boolean;
   mail: MailConfig;
+  /** Origin of links in e-mails, without a trailing slash. */
+  appUrl: string;
+  invitationTtlMs: number;
+  resetTtlMs: number;
 }
 
 export class ConfigError extends Error {
@@ -101,6 +110,9 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     serveClient: e.SERVE_CLIENT ?? e.NODE_ENV === 'production',
     dbPoolMax: e.DB_POOL_MAX,
     logSql: e.LOG_SQL,
+    appUrl: (e.APP_URL ?? `http://${e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
+    invitationTtlMs: e.INVITATION_DAYS * 86_400_000,
+    resetTtlMs: e.RESET_MINUTES * 60_000,
     mail: {
       host: e.SMTP_HOST ?? '127.0.0.1',
       port: e.SMTP_PORT ?? (e.SMTP_HOST ? (e.SMTP_SECURE ? 465 : 587) : 2525),

@@ -11,7 +11,12 @@ import { Order } from './modules/orders/order.entity';
 import { CustomProfile } from './modules/stock/custom-profile.entity';
 import { StockOffcut } from './modules/stock/stock-offcut.entity';
 import { Supplier } from './modules/suppliers/supplier.entity';
+import { ProjectClient } from './modules/access/project-client.entity';
+import { ShareLink } from './modules/sharing/share-link.entity';
+import { Invitation } from './modules/invitations/invitation.entity';
+import { PasswordReset } from './modules/auth/password-reset.entity';
+import { Activity } from './modules/activity/activity.entity';
 
 /** Every entity the ORM knows, listed explicitly (no folder scanning). */
-export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment];
+export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment, ProjectClient, ShareLink, Invitation, PasswordReset, Activity];
 export { Frame, FrameRevision, Membership, Project, User, Workshop };

@@ -5,7 +5,13 @@ import type { OrderList, ShopMeta } from '@shared/shop/types';
 import { facts, MUTED, rowsLayout, shopDocument } from './layout';
 import { renderPdf } from './render';
 
-export type OrderPdfInfo = { supplier: string | null; reference: string | null; mode: OrderMode };
+export type OrderPdfInfo = {
+  supplier: string | null;
+  reference: string | null;
+  mode: OrderMode;
+  /** The copy mailed to the supplier: only the chosen way of buying, none of the shop's comparison. */
+  forSupplier?: boolean;
+};
 
 /** The order list: stock bars by profile and length with cost, then the cut-to-length alternative (or the reverse). */
 export async function orderListPdf(order: OrderList, meta: ShopMeta, info: OrderPdfInfo): Promise<Buffer> {
@@ -18,8 +24,12 @@ export async function orderListPdf(order: OrderList, meta: ShopMeta, info: Order
       ['Supplier', info.supplier ?? '—'],
       ['Order', info.reference ?? 'draft'],
       ['Buying', info.mode === 'stock' ? 'Stock bars' : 'Parts cut to length'],
-      ['Stock bars total', m(order.stockTotal)],
-      ['Cut to length total', m(order.cutToLengthTotal)],
+      ...(info.forSupplier
+        ? [[info.mode === 'stock' ? 'Total' : 'Total with cutting fees', m(info.mode === 'stock' ? order.stockTotal : order.cutToLengthTotal)] as [string, string]]
+        : ([
+            ['Stock bars total', m(order.stockTotal)],
+            ['Cut to length total', m(order.cutToLengthTotal)],
+          ] as [string, string][])),
     ]),
   ];
 
@@ -56,7 +66,8 @@ export async function orderListPdf(order: OrderList, meta: ShopMeta, info: Order
     cut.push({ text: `Cost per part = length × price per metre + ${m(fee)} per cut. ${terms}.`, fontSize: 8.5, color: MUTED, margin: [0, 4, 0, 0] });
   }
   const [first, second] = info.mode === 'stock' ? [stock, cut] : [cut, stock];
-  content.push(...first, { text: ' ', margin: [0, 6, 0, 0] }, ...second);
+  if (info.forSupplier) content.push(...first);
+  else content.push(...first, { text: ' ', margin: [0, 6, 0, 0] }, ...second);
   content.push({ text: 'Prices as entered for the supplier; confirm with them before paying. Parts cut to length are within the supplier’s own tolerance.', color: MUTED, fontSize: 8.5, italics: true, margin: [0, 12, 0, 0] });
   return renderPdf(shopDocument('Order list', meta, content));
 }

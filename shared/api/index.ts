@@ -6,3 +6,6 @@ export * from './auth';
 export * from './workshops';
 export * from './projects';
 export * from './frames';
+export * from './invitations';
+export * from './sharing';
+export * from './activity';

@@ -72,7 +72,16 @@ export const orderStatusPatchSchema = z.object({ status: z.literal('received') }
 export const orderParamsSchema = z.object({ orderId: idSchema });
 
 /** What was ordered, frozen when the order was made. */
-export type OrderContents = { meta: ShopMeta; order: OrderList; text: string; supplierName: string; supplierEmail: string };
+export type OrderContents = {
+  meta: ShopMeta;
+  order: OrderList;
+  /** The shop's view: the chosen way of buying and the other for comparison. */
+  text: string;
+  /** What the e-mail to the supplier says: the chosen way only (absent on orders made before it was kept). */
+  supplierText?: string;
+  supplierName: string;
+  supplierEmail: string;
+};
 
 export type OrderSummary = {
   id: string;
@@ -148,7 +157,17 @@ export const offcutParamsSchema = z.object({ workshopId: idSchema, offcutId: idS
 
 export const ATTACHMENT_TYPES = ['image/jpeg', 'image/png', 'image/webp', 'application/pdf'] as const;
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
-export type AttachmentView = { id: string; filename: string; contentType: string; size: number; createdAt: string; uploadedBy: { id: string; name: string } | null };
+export type AttachmentView = {
+  id: string;
+  filename: string;
+  contentType: string;
+  size: number;
+  createdAt: string;
+  uploadedBy: { id: string; name: string } | null;
+  /** Shown to the project's clients and on its share links. */
+  sharedWithClient: boolean;
+};
+export const updateAttachmentRequestSchema = z.object({ sharedWithClient: z.boolean({ message: 'Must be true or false' }) });
 export const attachmentParamsSchema = z.object({ attachmentId: idSchema });
 
 // ----- outbox (local test mail server) -----

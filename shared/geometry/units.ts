@@ -1,5 +1,4 @@
-import { all, create, type MathNode, type Unit } from 'mathjs';
-import { InputError } from '../errors';
+import { parseQuantity, type ParseOptions, type QuantityKind } from './quantity-parser';
 
 /** Exactly 25.4 mm to the inch (NIST; US Federal Register notice of 1 July 1959). */
 export const MM_PER_INCH = 25.4;
@@ -9,159 +8,71 @@ export const STANDARD_GRAVITY = 9.80665;
 /** Tape-measure resolutions we print inches to (a power of two). */
 export type InchFraction = 2 | 4 | 8 | 16 | 32 | 64;
 
-// A private instance so nothing we configure leaks into other users of mathjs.
-const math = create(all, { number: 'number' });
+export type { ParseOptions } from './quantity-parser';
 
-const ALLOWED_OPERATORS = new Set(['add', 'subtract', 'multiply', 'divide', 'unaryMinus', 'unaryPlus']);
-const MAX_INPUT = 200;
-
-/** How a quantity kind is recognised and what a bare number means for it. */
-type Kind = {
-  noun: string;
-  examples: string;
-  /** mathjs unit whose dimension the result must have, and the unit we return numbers in. */
-  base: string;
-  bare: string;
-  /** Other dimensions accepted, each with the factor that turns its value (in `unit`) into `base`. */
-  alternatives?: { unit: string; factor: number }[];
+export type LengthOptions = ParseOptions & {
+  /** What a bare number is: millimetres (the default) or inches, the unit on screen. */
+  bare?: 'mm' | 'in';
 };
 
-const LENGTH: Kind = { noun: 'a length', examples: '"750 mm", "29 1/2 in", "3 ft - 40 mm"', base: 'mm', bare: 'mm' };
-const FORCE: Kind = {
+const LENGTH = (bare: 'mm' | 'in'): QuantityKind => ({
+  noun: 'a length',
+  examples: bare === 'in' ? '"29 1/2", "2 ft 3-1/2 in", "750 mm"' : '"750 mm", "29 1/2 in", "3 ft - 40 mm"',
+  dim: [1, 0, 0],
+  bareFactor: bare === 'in' ? MM_PER_INCH : 1,
+});
+const FORCE: QuantityKind = {
   noun: 'a force',
   examples: '"500 N", "112 lbf", "25 kg"',
-  base: 'N',
-  bare: 'N',
-  alternatives: [{ unit: 'kg', factor: STANDARD_GRAVITY }],
+  dim: [0, 0, 1],
+  alternatives: [{ dim: [0, 1, 0], factor: STANDARD_GRAVITY }],
+  bareFactor: 1,
 };
-const MASS: Kind = { noun: 'a mass', examples: '"25 kg", "55 lb"', base: 'kg', bare: 'kg' };
-const FORCE_PER_LENGTH: Kind = {
+const MASS: QuantityKind = { noun: 'a mass', examples: '"25 kg", "55 lb"', dim: [0, 1, 0], bareFactor: 1 };
+const FORCE_PER_LENGTH: QuantityKind = {
   noun: 'a load per length',
   examples: '"2 N/mm", "10 lbf/in", "100 N/m"',
-  base: 'N/mm',
-  bare: 'N/mm',
-  alternatives: [{ unit: 'kg/mm', factor: STANDARD_GRAVITY }],
+  dim: [-1, 0, 1],
+  alternatives: [{ dim: [-1, 1, 0], factor: STANDARD_GRAVITY }],
+  bareFactor: 1,
 };
 
 /**
- * Rewrite shop notation into something mathjs reads the way a builder means it:
- * - `29 1/2` is a mixed number, not 29 × 1/2 (mathjs would multiply), so it becomes `(29 + 1/2)`;
- * - `"` and `'` are inch and foot marks; `in` becomes `inch` because mathjs also uses `in` for conversions;
- * - a foot value followed straight by another number (`5 ft 3 in`, `5' 3"`) is a sum, not a product.
+ * A length in millimetres. A bare number is in `opts.bare` (millimetres unless told). Reads shop notation
+ * (`2 ft 3-1/2 in`, `2'3-1/2"`, `29 ½`), sums, differences and products; see quantity-parser.ts.
  */
-export function normaliseExpression(text: string): string {
-  return text
-    .replace(/[×✕]/g, '*')
-    .replace(/[−–]/g, '-')
-    .replace(/⁄/g, '/')
-    .replace(/[″”“]/g, '"')
-    .replace(/[′’‘]/g, "'")
-    .replace(/"/g, ' inch ')
-    .replace(/'/g, ' ft ')
-    .replace(/\b(in|ins|inches)\b/g, 'inch')
-    .replace(/(?<![\d.])(\d+)\s+(\d+)\s*\/\s*(\d+)(?![\d.])/g, '($1 + $2/$3)')
-    .replace(/\b(ft|feet|foot)\s+(?=[\d(.])/g, '$1 + ')
-    .replace(/\s+/g, ' ')
-    .trim();
-}
-
-function checkNodes(root: MathNode, field: string, text: string): void {
-  root.traverse((node) => {
-    switch (node.type) {
-      case 'ConstantNode':
-      case 'ParenthesisNode':
-        return;
-      case 'OperatorNode': {
-        const fn = (node as unknown as { fn: string }).fn;
-        if (!ALLOWED_OPERATORS.has(fn)) throw new InputError(field, `${field}: "${text}" uses an operator we don't accept here`);
-        return;
-      }
-      case 'SymbolNode': {
-        const name = (node as unknown as { name: string }).name;
-        if (!math.Unit.isValuelessUnit(name)) throw new InputError(field, `${field}: "${name}" is not a unit we know (in "${text}")`);
-        return;
-      }
-      default:
-        throw new InputError(field, `${field}: "${text}" is not a plain quantity`);
-    }
-  });
-}
-
-function describe(u: Unit): string {
-  const dims: [string, string][] = [
-    ['m', 'a length'],
-    ['kg', 'a mass'],
-    ['N', 'a force'],
-    ['N/m', 'a force per length'],
-    ['kg/m', 'a mass per length'],
-    ['s', 'a time'],
-    ['m^2', 'an area'],
-  ];
-  for (const [unit, noun] of dims) if (u.equalBase(math.unit(unit))) return noun;
-  return 'a different kind of quantity';
-}
-
-const clean = (v: number): number => Math.round(v * 1e9) / 1e9;
-
-function parseQuantity(text: string, field: string, kind: Kind): number {
-  const bad = (why: string) => new InputError(field, `${field}: ${why}; expected ${kind.noun} such as ${kind.examples}`);
-  if (typeof text !== 'string' || text.trim() === '') throw bad('no value given');
-  if (text.length > MAX_INPUT) throw bad(`the value is longer than ${MAX_INPUT} characters`);
-  let node: MathNode;
-  try {
-    node = math.parse(normaliseExpression(text));
-  } catch {
-    throw bad(`"${text}" could not be read`);
-  }
-  checkNodes(node, field, text);
-  let value: unknown;
-  try {
-    value = node.evaluate();
-  } catch {
-    throw bad(`"${text}" could not be worked out (mixing units that don't add up?)`);
-  }
-  let result: number;
-  if (typeof value === 'number') {
-    result = math.unit(value, kind.bare).toNumber(kind.base);
-  } else if (math.isUnit(value)) {
-    const u = value as Unit;
-    if (u.value === null) throw bad(`"${text}" has a unit but no number`);
-    const base = math.unit(kind.base);
-    const alt = kind.alternatives?.find((a) => u.equalBase(math.unit(a.unit)));
-    if (u.equalBase(base)) result = u.toNumber(kind.base);
-    else if (alt) result = u.toNumber(alt.unit) * alt.factor;
-    else throw bad(`"${text}" is ${describe(u)}`);
-  } else {
-    throw bad(`"${text}" is not a single quantity`);
-  }
-  if (!Number.isFinite(result)) throw bad(`"${text}" is not a finite value`);
-  return clean(result);
-}
-
-/** A length in millimetres. A bare number is millimetres. Accepts sums, products and shop fractions. */
-export function parseLength(text: string, field = 'length'): number {
-  return parseQuantity(text, field, LENGTH);
+export function parseLength(text: string, field = 'length', opts: LengthOptions = {}): number {
+  return parseQuantity(text, field, LENGTH(opts.bare ?? 'mm'), opts);
 }
 
 /**
  * A force in newtons. A bare number is newtons. A mass ("25 kg", "55 lb") is taken as the weight of that mass
  * under standard gravity (× 9.80665 m/s²), since loads are usually known as the mass of what sits on a member.
  */
-export function parseForce(text: string, field = 'force'): number {
-  return parseQuantity(text, field, FORCE);
+export function parseForce(text: string, field = 'force', opts: ParseOptions = {}): number {
+  return parseQuantity(text, field, FORCE, opts);
 }
 
 /** A mass in kilograms. A bare number is kilograms; "lb" is the pound mass (0.45359237 kg). */
-export function parseMass(text: string, field = 'mass'): number {
-  return parseQuantity(text, field, MASS);
+export function parseMass(text: string, field = 'mass', opts: ParseOptions = {}): number {
+  return parseQuantity(text, field, MASS, opts);
 }
 
 /**
  * A distributed load in N/mm. A bare number is N/mm. A mass per length ("5 kg/m") is taken as its weight under
  * standard gravity, as for parseForce.
  */
-export function parseForcePerLength(text: string, field = 'load'): number {
-  return parseQuantity(text, field, FORCE_PER_LENGTH);
+export function parseForcePerLength(text: string, field = 'load', opts: ParseOptions = {}): number {
+  return parseQuantity(text, field, FORCE_PER_LENGTH, opts);
+}
+
+/** Whether the reader's locale writes decimals with a comma (1,5), from Intl's own number format. */
+export function localeUsesDecimalComma(locale?: string): boolean {
+  try {
+    return new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value === ',';
+  } catch {
+    return false;
+  }
 }
 
 export const mmToInches = (mm: number): number => mm / MM_PER_INCH;

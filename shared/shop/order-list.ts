@@ -52,8 +52,16 @@ export function orderList(profiles: readonly PlannedProfile[], currency: string,
 
 export type OrderMode = 'stock' | 'cut-to-length';
 
-/** The order as plain text, for the body of the e-mail to the supplier: the chosen way of buying first. */
-export function orderText(order: OrderList, mode: OrderMode, f: { lengthText: (mm: number) => string; money: (v: number) => string; heading: string }): string {
+/**
+ * The order as plain text: the chosen way of buying, then (for the shop's own view) the other way for
+ * comparison. With `comparison: false` it is what the supplier gets: only what they are asked to supply, not
+ * what the shop weighed it against.
+ */
+export function orderText(
+  order: OrderList,
+  mode: OrderMode,
+  f: { lengthText: (mm: number) => string; money: (v: number) => string; heading: string; comparison?: boolean },
+): string {
   const stock: string[] = ['Stock bars to buy:'];
   for (const p of order.profiles) {
     for (const l of p.order.stock.lines) {
@@ -69,6 +77,7 @@ export function orderText(order: OrderList, mode: OrderMode, f: { lengthText: (m
   }
   cut.push(`  ${order.cutCount} cuts; total with cutting fees: ${f.money(order.cutToLengthTotal)}`);
   const [first, second] = mode === 'stock' ? [stock, cut] : [cut, stock];
+  if (f.comparison === false) return [f.heading, '', ...first].join('\n');
   second[0] = mode === 'stock' ? 'For comparison, the same parts cut to length:' : 'For comparison, as stock bars:';
   return [f.heading, '', ...first, '', ...second].join('\n');
 }

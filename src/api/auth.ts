@@ -7,7 +7,11 @@ import {
   type SignInRequest,
   type SignUpRequest,
 } from '@shared/api';
+import { z } from 'zod';
+import type { ChangePasswordRequest, PasswordResetConfirm, PasswordResetRequest } from '@shared/api';
 import type { Http } from './http';
+
+const csrfTokenReplySchema = z.object({ csrfToken: z.string() });
 
 export function createAuthApi(http: Http) {
   return {
@@ -17,5 +21,8 @@ export function createAuthApi(http: Http) {
     signIn: (body: SignInRequest): Promise<AuthResponse> => http.post('/auth/signin', body, authResponseSchema),
     signUp: (body: SignUpRequest): Promise<AuthResponse> => http.post('/auth/signup', body, authResponseSchema),
     signOut: (): Promise<void> => http.post('/auth/signout', undefined, null),
+    requestReset: (body: PasswordResetRequest): Promise<void> => http.post('/auth/password-reset', body, null),
+    confirmReset: (body: PasswordResetConfirm): Promise<void> => http.post('/auth/password-reset/confirm', body, null),
+    changePassword: async (body: ChangePasswordRequest): Promise<string> => (await http.post('/auth/password', body, csrfTokenReplySchema)).csrfToken,
   };
 }

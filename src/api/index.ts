@@ -3,6 +3,7 @@ import { createAuthApi } from './auth';
 import { createFramesApi } from './frames';
 import type { Http } from './http';
 import { createMembersApi } from './members';
+import { createActivityApi, createInvitationsApi, createSharingApi } from './invitations';
 import { createProjectsApi } from './projects';
 import { createWorkshopsApi } from './workshops';
 
@@ -13,6 +14,9 @@ export function createApi(http: Http) {
     members: createMembersApi(http),
     projects: createProjectsApi(http),
     frames: createFramesApi(http),
+    invitations: createInvitationsApi(http),
+    sharing: createSharingApi(http),
+    activity: createActivityApi(http),
   };
 }
 export type Api = ReturnType<typeof createApi>;

@@ -8,6 +8,7 @@ export const ACTION_WORDS: Readonly<Record<Action, string>> = {
   'project.delete': 'delete projects',
   'frame.write': 'create, rename and delete frames',
   'cuts.tick': 'tick off cuts',
+  'shop.read': 'see the shop side of a project (saw lists, cutting, files)',
   read: 'see this workshop’s projects',
 };
 
@@ -17,4 +18,5 @@ export const ROLE_COLORS: Readonly<Record<Role, string>> = {
   designer: 'primary-darken-1',
   cutter: 'secondary',
   viewer: 'info',
+  client: 'info',
 };

@@ -33,19 +33,23 @@ export function installGuards(router: Router, pinia: Pinia): void {
 
     if (to.name === 'home') {
       const workshopId = session.currentWorkshopId;
-      return workshopId ? { name: 'projects', params: { workshopId } } : { name: 'workshops' };
+      if (workshopId) return { name: 'projects', params: { workshopId } };
+      const first = session.clientProjects[0];
+      if (first) return { name: 'project', params: { workshopId: first.workshop.id, projectId: first.project.id } };
+      return { name: 'workshops' };
     }
 
     const workshopId = 'workshopId' in to.params && typeof to.params.workshopId === 'string' ? to.params.workshopId : null;
+    const projectId = 'projectId' in to.params && typeof to.params.projectId === 'string' ? to.params.projectId : null;
     if (workshopId) {
-      let role = session.roleIn(workshopId);
+      let role = session.roleIn(workshopId, projectId);
       if (!role) {
         // Someone may have added this person to the workshop since the page loaded.
         await session.refresh().catch(() => undefined);
-        role = session.roleIn(workshopId);
+        role = session.roleIn(workshopId, projectId);
       }
       if (!role) return { name: 'forbidden', query: { reason: 'not-member' } };
-      session.selectWorkshop(workshopId);
+      if (role !== 'client') session.selectWorkshop(workshopId);
       if (to.meta.requires && !can(role, to.meta.requires)) {
         return { name: 'forbidden', query: { need: to.meta.requires, workshop: workshopId } };
       }

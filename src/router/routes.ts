@@ -21,6 +21,10 @@ export interface RouteNamedMap {
   orders: RouteRecordInfo<'orders', '/w/:workshopId/orders', WorkshopParams, WorkshopParams>;
   outbox: RouteRecordInfo<'outbox', '/w/:workshopId/outbox', WorkshopParams, WorkshopParams>;
   planner: RouteRecordInfo<'planner', '/planner', NoParams, NoParams>;
+  invitation: RouteRecordInfo<'invitation', '/invitation/:token', { token: string }, { token: string }>;
+  'forgot-password': RouteRecordInfo<'forgot-password', '/forgot-password', NoParams, NoParams>;
+  'reset-password': RouteRecordInfo<'reset-password', '/reset-password/:token', { token: string }, { token: string }>;
+  shared: RouteRecordInfo<'shared', '/shared/:token', { token: string }, { token: string }>;
   forbidden: RouteRecordInfo<'forbidden', '/forbidden', NoParams, NoParams>;
   'not-found': RouteRecordInfo<'not-found', '/:pathMatch(.*)*', { pathMatch: string | string[] }, { pathMatch: string[] }>;
 }
@@ -75,7 +79,12 @@ export const routes: RouteRecordRaw[] = [
     meta: { requires: 'read', title: 'Frame' },
   },
   // Shop outputs and ordering.
-  { path: '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', name: 'cutting', component: () => import('@/views/CuttingView.vue'), meta: { requires: 'read', title: 'Cutting' } },
+  { path: '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', name: 'cutting', component: () => import('@/views/CuttingView.vue'), meta: { requires: 'shop.read', title: 'Cutting' } },
+  // Links from e-mails and share links: open without signing in.
+  { path: '/invitation/:token', name: 'invitation', component: () => import('@/views/InvitationView.vue'), meta: { public: true, title: 'Invitation' } },
+  { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { public: true, title: 'Forgotten password' } },
+  { path: '/reset-password/:token', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), meta: { public: true, title: 'New password' } },
+  { path: '/shared/:token', name: 'shared', component: () => import('@/views/SharedProjectView.vue'), meta: { public: true, title: 'Shared project' } },
   { path: '/w/:workshopId/suppliers', name: 'suppliers', component: () => import('@/views/SuppliersView.vue'), meta: { requires: 'read', title: 'Suppliers and stock' } },
   { path: '/w/:workshopId/orders', name: 'orders', component: () => import('@/views/OrdersView.vue'), meta: { requires: 'read', title: 'Orders' } },
   { path: '/planner', name: 'planner', component: () => import('@/views/QuickPlannerView.vue'), meta: { title: 'Quick planner' } },

@@ -1,6 +1,6 @@
 import { computed, ref } from 'vue';
 import { defineStore } from 'pinia';
-import type { Membership, Role, SignInRequest, SignUpRequest, User } from '@shared/api';
+import type { ClientProject, Membership, Role, SignInRequest, SignUpRequest, User } from '@shared/api';
 import { isApiError, useApi } from '@/api';
 
 const WORKSHOP_KEY = 'slotwright.workshop';
@@ -28,6 +28,8 @@ export const useSessionStore = defineStore('session', () => {
 
   const user = ref<User | null>(null);
   const memberships = ref<Membership[]>([]);
+  /** Projects this person was let into as a client (they are no member of those workshops). */
+  const clientProjects = ref<ClientProject[]>([]);
   const csrfToken = ref<string | null>(null);
   const currentWorkshopId = ref<string | null>(readStoredWorkshop());
   /** Set once the first /auth/me has answered, so guards know whether "no user" means signed out. */
@@ -40,8 +42,12 @@ export const useSessionStore = defineStore('session', () => {
   const currentWorkshop = computed(() => currentMembership.value?.workshop ?? null);
   const currentRole = computed<Role | null>(() => currentMembership.value?.role ?? null);
 
-  function roleIn(workshopId: string | null | undefined): Role | null {
-    return memberships.value.find((m) => m.workshop.id === workshopId)?.role ?? null;
+  /** The role in a workshop, or 'client' in a project of it this person was let into. */
+  function roleIn(workshopId: string | null | undefined, projectId?: string | null): Role | null {
+    const member = memberships.value.find((m) => m.workshop.id === workshopId)?.role;
+    if (member) return member;
+    if (projectId && clientProjects.value.some((c) => c.project.id === projectId && c.workshop.id === workshopId)) return 'client';
+    return null;
   }
 
   function selectWorkshop(workshopId: string | null): void {
@@ -59,6 +65,7 @@ export const useSessionStore = defineStore('session', () => {
   function forget(): void {
     user.value = null;
     memberships.value = [];
+    clientProjects.value = [];
     csrfToken.value = null;
   }
 
@@ -70,6 +77,7 @@ export const useSessionStore = defineStore('session', () => {
       const me = await api.auth.me();
       user.value = me.user;
       memberships.value = me.memberships;
+      clientProjects.value = me.clientProjects;
       csrfToken.value = me.csrfToken;
       settleWorkshop();
     } catch (error) {
@@ -115,6 +123,13 @@ export const useSessionStore = defineStore('session', () => {
     await refresh();
   }
 
+  /** Takes over a session the server started elsewhere (accepting an invitation signs in). */
+  async function adopt(reply: { user: User; csrfToken: string }): Promise<void> {
+    csrfToken.value = reply.csrfToken;
+    user.value = reply.user;
+    await refresh();
+  }
+
   async function signOut(): Promise<void> {
     try {
       await api.auth.signOut();
@@ -126,6 +141,9 @@ export const useSessionStore = defineStore('session', () => {
   return {
     user,
     memberships,
+    clientProjects,
+    adopt,
+    ensureCsrfToken,
     csrfToken,
     currentWorkshopId,
     checked,

@@ -14,7 +14,7 @@ describe('a viewer sees the frame editor read-only', () => {
     await signIn(page, DEMO.viewer);
     await openDemoFrame(page);
     await page.getByTestId('frame-editor').waitFor();
-    await page.getByText('Read only (Viewer (client))').waitFor();
+    await page.getByText('Read only (Viewer)').waitFor();
 
     expect(await page.getByRole('button', { name: /^Draw/ }).isDisabled()).toBe(true);
     for (const name of ['Undo', 'Delete', 'Duplicate']) expect(await page.getByRole('button', { name: new RegExp(`^${name}`) }).count()).toBe(0);

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { DEMO, DEMO_PROJECT, launchBrowser, newPage, screenshotPath, signIn } from './support/browser';
 
-// A designer attaches a photo to the project; a viewer (the client) can open it but not attach or remove.
+// A designer attaches a photo to the project; a viewer can open it but not attach or remove.
 
 // The smallest valid PNG: one white pixel.
 const PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAIAAACQd1PeAAAADElEQVR4nGP4//8/AAX+Av4N70a4AAAAAElFTkSuQmCC', 'base64');

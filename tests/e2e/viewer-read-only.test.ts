@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DEMO, openDemoFrame, signIn, useBrowserPage } from './support/browser';
 
-describe('a viewer (the client) reads without changing', () => {
+describe('a viewer reads without changing', () => {
   let page: Page;
 
   useBrowserPage((opened) => {
@@ -14,7 +14,7 @@ describe('a viewer (the client) reads without changing', () => {
     expect(await page.getByRole('button', { name: 'New project' }).count()).toBe(0);
 
     await openDemoFrame(page);
-    await page.getByText('Viewer (client)').first().waitFor();
+    await page.getByText('Viewer').first().waitFor();
     expect(await page.getByRole('button', { name: 'Rename frame' }).count()).toBe(0);
     expect(await page.getByLabel('Frame name').count()).toBe(0);
   });
@@ -43,6 +43,6 @@ describe('a viewer (the client) reads without changing', () => {
     const workshopId = new URL(page.url()).pathname.split('/')[2];
     await page.goto(`/w/${workshopId}/members`);
     await page.getByRole('heading', { name: 'Not allowed', level: 1 }).waitFor();
-    await page.getByText('Your role in this workshop is Viewer (client)').waitFor();
+    await page.getByText('Your role in this workshop is Viewer').waitFor();
   });
 });

@@ -3,6 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { OrderDetail, Supplier } from '@shared/api/shop';
 import { ACTORS, EDITORS, MEMBERS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 import { pdfText } from '../support/pdf-text';
+import { outboxAttachment } from '../../server/mail/outbox';
 
 let w: ShopWorld;
 useShopWorld((world) => {
@@ -112,6 +113,13 @@ describe('orders', () => {
     expect(mail.envelopeTo).toEqual(['orders@northgate.test']);
     expect(mail.subject).toContain(order.reference);
     expect(mail.text).toContain('Stock bars to buy');
+    // the supplier gets what to supply, not the shop's own comparison with buying cut to length
+    expect(mail.text).not.toMatch(/comparison|cut to length|cut-to-length/i);
+    const pdf = await outboxAttachment(w.mailDir, w.workshopId, mail.id, 0);
+    const { text: pdfWords } = await pdfText(pdf!.content);
+    expect(pdfWords).toContain('Stock bars');
+    expect(pdfWords).not.toContain('Cut to length by the supplier');
+    expect(pdfWords).not.toContain('Cut to length total');
     expect(mail.attachments).toEqual([expect.objectContaining({ filename: `order-${order.reference}.pdf`, contentType: 'application/pdf' })]);
     expect(mail.workshopId).toBe(w.workshopId);
   });
@@ -130,7 +138,9 @@ describe('orders', () => {
     const [a, b] = await Promise.all([c('owner').post(`/api/orders/${draft.id}/send`), c('designer').post(`/api/orders/${draft.id}/send`)]);
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     expect(w.fake.received().length).toBe(before + 1);
-    expect(w.fake.received().at(-1)!.text.indexOf('Parts cut to length')).toBeLessThan(w.fake.received().at(-1)!.text.indexOf('as stock bars'));
+    // the supplier is asked for the parts cut to length, and not shown what the shop compared them with
+    expect(w.fake.received().at(-1)!.text).toContain('Parts cut to length');
+    expect(w.fake.received().at(-1)!.text).not.toMatch(/stock bars|comparison/i);
   });
 
   it('marks a sent order received (once), and refuses to delete it', async () => {

@@ -21,7 +21,7 @@ describe('demo seed', () => {
     expect(await seedDemoData(ctx.orm)).toBe(false);
     const em = ctx.orm.em.fork();
     expect(await em.count(Workshop, { name: DEMO_WORKSHOP })).toBe(1);
-    expect(await em.count(User, {})).toBe(4);
+    expect(await em.count(User, {})).toBe(DEMO_USERS.length);
     expect(await em.count(Frame, {})).toBe(1);
   });
 
@@ -29,6 +29,12 @@ describe('demo seed', () => {
     for (const demo of DEMO_USERS) {
       const client = await signedIn(ctx.app, { email: demo.email, password: DEMO_PASSWORD });
       const me = meResponseSchema.parse((await client.get('/api/auth/me').expect(200)).body);
+      if (demo.role === 'client') {
+        // The demo client is let into the demo project only, and is no member of the workshop.
+        expect(me.memberships).toEqual([]);
+        expect(me.clientProjects).toEqual([{ project: { id: expect.any(String), name: DEMO_PROJECT }, workshop: { id: expect.any(String), name: DEMO_WORKSHOP } }]);
+        continue;
+      }
       expect(me.memberships).toEqual([{ workshop: { id: expect.any(String), name: DEMO_WORKSHOP }, role: demo.role }]);
       if (demo.role !== 'designer') continue;
       const projects = (await client.get(`/api/workshops/${me.memberships[0].workshop.id}/projects`).expect(200)).body as { id: string; name: string }[];

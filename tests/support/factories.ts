@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import type { FrameDocumentJson } from '@shared/api/frames';
-import type { Role } from '@shared/api/roles';
+import type { Role, WorkshopRole } from '@shared/api/roles';
 import { parseFrameDocument } from '@shared/model/parse';
 import type { Orm } from '../../server/db';
 import { FrameRevision } from '../../server/modules/frames/frame-revision.entity';
@@ -49,7 +49,7 @@ export async function makeWorkshop(
 ): Promise<WorkshopEntity> {
   const em = orm.em.fork();
   const workshop = em.create(Workshop, { name });
-  for (const m of members) em.create(Membership, { workshop, user: em.getReference(User, m.user.id), role: m.role });
+  for (const m of members) em.create(Membership, { workshop, user: em.getReference(User, m.user.id), role: m.role as WorkshopRole });
   await em.flush();
   return workshop;
 }

@@ -1,26 +1,40 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { can, type Action, type Role } from '@shared/api/roles';
+import { can, type Action, type Role, type WorkshopRole } from '@shared/api/roles';
 import { ForbiddenError, NotFoundError } from '../../errors';
 import { Frame, type FrameEntity } from '../frames/frame.entity';
 import { Project, type ProjectEntity } from '../projects/project.entity';
 import { Membership } from '../workshops/membership.entity';
+import { ProjectClient } from './project-client.entity';
 
 // Every route that touches workshop data goes through one of these. Someone who is not a member gets 404
 // (the workshop's contents are not theirs to know about); a member whose role lacks the action gets 403.
+// A client is no member: the workshop's own pages (projects list, suppliers, orders, stock) are 404 to them,
+// and in a project they were let into they hold the role 'client', which reads the design and nothing of the
+// shop. A client refused an action gets 404 as well, so nothing tells them what else exists.
 
-export async function roleIn(em: EntityManager, userId: string, workshopId: string): Promise<Role | null> {
+export async function roleIn(em: EntityManager, userId: string, workshopId: string): Promise<WorkshopRole | null> {
   const m = await em.findOne(Membership, { workshop: workshopId, user: userId }, { fields: ['role'] });
   return m?.role ?? null;
 }
 
-function check(role: Role, action: Action): void {
-  if (!can(role, action)) throw new ForbiddenError();
+/** The caller's role in a project: their workshop role, else 'client' when let into this project, else null. */
+export async function roleInProject(em: EntityManager, userId: string, project: ProjectEntity): Promise<Role | null> {
+  const role = await roleIn(em, userId, project.workshop.id);
+  if (role) return role;
+  const asClient = await em.count(ProjectClient, { project: project.id, user: userId });
+  return asClient > 0 ? 'client' : null;
 }
 
-export async function authorizeWorkshop(em: EntityManager, userId: string, workshopId: string, action: Action): Promise<Role> {
+function check(role: Role, action: Action, what: string): void {
+  if (can(role, action)) return;
+  if (role === 'client') throw new NotFoundError(what);
+  throw new ForbiddenError();
+}
+
+export async function authorizeWorkshop(em: EntityManager, userId: string, workshopId: string, action: Action): Promise<WorkshopRole> {
   const role = await roleIn(em, userId, workshopId);
   if (!role) throw new NotFoundError('Workshop');
-  check(role, action);
+  check(role, action, 'Workshop');
   return role;
 }
 
@@ -31,9 +45,9 @@ export async function authorizeProject(
   action: Action,
 ): Promise<{ project: ProjectEntity; role: Role }> {
   const project = await em.findOne(Project, { id: projectId, deletedAt: null });
-  const role = project ? await roleIn(em, userId, project.workshop.id) : null;
+  const role = project ? await roleInProject(em, userId, project) : null;
   if (!project || !role) throw new NotFoundError('Project');
-  check(role, action);
+  check(role, action, 'Project');
   return { project, role };
 }
 
@@ -45,8 +59,10 @@ export async function authorizeFrame(
   action: Action,
 ): Promise<{ frame: FrameEntity; role: Role }> {
   const frame = await em.findOne(Frame, { id: frameId, project: { deletedAt: null } }, { populate: ['project'] });
-  const role = frame ? await roleIn(em, userId, frame.project.workshop.id) : null;
+  const role = frame ? await roleInProject(em, userId, frame.project) : null;
   if (!frame || !role) throw new NotFoundError('Frame');
-  check(role, action);
+  // A client never sees a frame the shop has deleted.
+  if (role === 'client' && frame.deletedAt) throw new NotFoundError('Frame');
+  check(role, action, 'Frame');
   return { frame, role };
 }

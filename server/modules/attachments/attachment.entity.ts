@@ -15,6 +15,8 @@ export const Attachment = defineEntity({
     contentType: p.string().columnType('text'),
     size: p.integer(),
     data: p.blob().lazy(),
+    /** Shown to the project's clients and on its share links; off until an owner or designer turns it on. */
+    sharedWithClient: p.boolean().default(false),
     uploadedBy: p.manyToOne(User).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
   },

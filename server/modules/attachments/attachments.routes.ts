@@ -1,8 +1,9 @@
 import { Router } from 'express';
-import { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, attachmentParamsSchema, type AttachmentView } from '@shared/api/shop';
+import { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, attachmentParamsSchema, updateAttachmentRequestSchema, type AttachmentView } from '@shared/api/shop';
+import { can } from '@shared/api/roles';
 import { projectParamsSchema } from '@shared/api/projects';
 import type { Orm } from '../../db';
-import { NotFoundError, ValidationError } from '../../errors';
+import { ForbiddenError, NotFoundError, ValidationError } from '../../errors';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
 import { authorizeProject } from '../access/access.service';
@@ -31,6 +32,7 @@ const view = (a: AttachmentEntity): AttachmentView => ({
   size: a.size,
   createdAt: a.createdAt.toISOString(),
   uploadedBy: a.uploadedBy ? { id: a.uploadedBy.id, name: a.uploadedBy.name } : null,
+  sharedWithClient: a.sharedWithClient,
 });
 
 function cleanName(name: string): string {
@@ -43,8 +45,9 @@ export function attachmentsRouter(orm: Orm): Router {
 
   router.get('/projects/:projectId/attachments', async (req, res) => {
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
-    await authorizeProject(orm.em, currentUserId(req), projectId, 'read');
-    const rows = await orm.em.find(Attachment, { project: projectId }, { orderBy: { createdAt: 'desc' }, populate: ['uploadedBy'] });
+    const { role } = await authorizeProject(orm.em, currentUserId(req), projectId, 'read');
+    const shown = can(role, 'shop.read') ? {} : { sharedWithClient: true };
+    const rows = await orm.em.find(Attachment, { project: projectId, ...shown }, { orderBy: { createdAt: 'desc' }, populate: ['uploadedBy'] });
     res.json(rows.map(view));
   });
 
@@ -67,15 +70,29 @@ export function attachmentsRouter(orm: Orm): Router {
     const { attachmentId } = parseInput(attachmentParamsSchema, req.params, 'params');
     const a = await orm.em.findOne(Attachment, { id: attachmentId }, { populate: ['data'] });
     if (!a) throw new NotFoundError('Attachment');
-    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'read').catch(() => {
+    const { role } = await authorizeProject(orm.em, currentUserId(req), a.project.id, 'read').catch(() => {
       throw new NotFoundError('Attachment');
     });
+    if (!can(role, 'shop.read') && !a.sharedWithClient) throw new NotFoundError('Attachment');
     res.setHeader('Content-Type', a.contentType);
     res.set('Content-Disposition', `${a.contentType === 'application/pdf' ? 'inline' : 'inline'}; filename="${encodeURIComponent(a.filename)}"`);
     res.set('Content-Security-Policy', "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'");
     res.set('Cache-Control', 'private, max-age=300');
     const bytes = await a.data.load();
     res.send(Buffer.from(bytes ?? Buffer.alloc(0)));
+  });
+
+  router.patch('/attachments/:attachmentId', async (req, res) => {
+    const { attachmentId } = parseInput(attachmentParamsSchema, req.params, 'params');
+    const a = await orm.em.findOne(Attachment, { id: attachmentId }, { populate: ['uploadedBy'] });
+    if (!a) throw new NotFoundError('Attachment');
+    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'project.write').catch((err: unknown) => {
+      throw err instanceof ForbiddenError ? err : new NotFoundError('Attachment');
+    });
+    const { sharedWithClient } = parseInput(updateAttachmentRequestSchema, req.body);
+    a.sharedWithClient = sharedWithClient;
+    await orm.em.flush();
+    res.json(view(a));
   });
 
   router.delete('/attachments/:attachmentId', async (req, res) => {

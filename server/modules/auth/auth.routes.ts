@@ -1,14 +1,23 @@
 import { Router, type Request } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { AuthResponse, CsrfResponse, MeResponse } from '@shared/api/auth';
-import { signInRequestSchema, signUpRequestSchema } from '@shared/api/auth';
+import {
+  changePasswordRequestSchema,
+  passwordResetConfirmSchema,
+  passwordResetRequestSchema,
+  signInRequestSchema,
+  signUpRequestSchema,
+} from '@shared/api/auth';
 import type { Config } from '../../config';
 import type { Orm } from '../../db';
 import { HttpError, UnauthenticatedError } from '../../errors';
 import { ensureCsrfToken, newCsrfToken } from '../../http/csrf';
 import { destroySession, regenerateSession, saveSession, SESSION_COOKIE } from '../../http/session';
 import { parseInput } from '../../validate';
-import { createUser, findUser, membershipsOf, toUserDto, verifyCredentials } from './auth.service';
+import { createMailer } from '../../mail/mailer';
+import { currentUserId } from '../../http/current-user';
+import { clientProjectsOf, createUser, findUser, membershipsOf, toUserDto, verifyCredentials } from './auth.service';
+import { changePassword, confirmPasswordReset, requestPasswordReset } from './password.service';
 
 function emailKey(req: Request): string {
   const email: unknown = (req.body as { email?: unknown } | undefined)?.email;
@@ -23,6 +32,9 @@ async function startSignedInSession(req: Request, userId: string): Promise<strin
   await saveSession(req);
   return req.session.csrfToken;
 }
+
+/** Signs the request in as `userId` (a new session id and CSRF token); used by sign-up, sign-in and invitations. */
+export { startSignedInSession };
 
 export function authRouter(orm: Orm, config: Config): Router {
   const router = Router();
@@ -47,6 +59,40 @@ export function authRouter(orm: Orm, config: Config): Router {
     legacyHeaders: false,
     keyGenerator: (req) => ipKeyGenerator(req.ip ?? ''),
     handler: rateLimited('Too many accounts created from this address; try again later'),
+  });
+
+  // Per address and e-mail, like sign-in, so nobody fills someone's mailbox with reset links.
+  const resetLimiter = rateLimit({
+    windowMs: config.signInRateLimit.windowMs,
+    limit: config.signInRateLimit.max,
+    standardHeaders: 'draft-7',
+    legacyHeaders: false,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${emailKey(req)}`,
+    handler: rateLimited('Too many reset requests; wait a few minutes and try again'),
+  });
+
+  router.post('/auth/password-reset', resetLimiter, async (req, res) => {
+    const { email } = parseInput(passwordResetRequestSchema, req.body);
+    const sendLater = await requestPasswordReset(orm.em, config, email);
+    res.status(202).json({ message: 'If this address has an account, a link to choose a new password is on its way.' });
+    const mailer = createMailer(config.mail);
+    sendLater(mailer)
+      .catch((err: unknown) => console.error('Password reset mail not sent:', err instanceof Error ? err.message : err))
+      .finally(() => mailer.close());
+  });
+
+  router.post('/auth/password-reset/confirm', async (req, res) => {
+    const { token, password } = parseInput(passwordResetConfirmSchema, req.body);
+    await confirmPasswordReset(orm.em, config, token, password);
+    res.status(204).end();
+  });
+
+  router.post('/auth/password', async (req, res) => {
+    const userId = currentUserId(req);
+    const { currentPassword, password } = parseInput(changePasswordRequestSchema, req.body);
+    await changePassword(orm.em, config, userId, req.sessionID, currentPassword, password);
+    const csrfToken = await startSignedInSession(req, userId);
+    res.json({ csrfToken });
   });
 
   router.get('/auth/csrf', async (req, res) => {
@@ -85,8 +131,9 @@ export function authRouter(orm: Orm, config: Config): Router {
       throw new UnauthenticatedError();
     }
     const memberships = await membershipsOf(orm.em, user.id);
+    const clientProjects = await clientProjectsOf(orm.em, user.id);
     const csrfToken = ensureCsrfToken(req);
-    res.json({ user: toUserDto(user), memberships, csrfToken } satisfies MeResponse);
+    res.json({ user: toUserDto(user), memberships, clientProjects, csrfToken } satisfies MeResponse);
   });
 
   return router;

@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs';
 import { UniqueConstraintViolationException, type EntityManager } from '@mikro-orm/postgresql';
-import type { Membership as MembershipDto, User as UserDto } from '@shared/api/auth';
+import type { ClientProject, Membership as MembershipDto, User as UserDto } from '@shared/api/auth';
+import { ProjectClient } from '../access/project-client.entity';
 import { ConflictError } from '../../errors';
 import { User, type UserEntity } from '../users/user.entity';
 import { Membership } from '../workshops/membership.entity';
@@ -48,4 +49,14 @@ export async function findUser(em: EntityManager, id: string): Promise<UserEntit
 export async function membershipsOf(em: EntityManager, userId: string): Promise<MembershipDto[]> {
   const rows = await em.find(Membership, { user: userId }, { populate: ['workshop'], orderBy: { workshop: { name: 'asc' } } });
   return rows.map((m) => ({ workshop: { id: m.workshop.id, name: m.workshop.name }, role: m.role }));
+}
+
+/** Projects the user was let into as a client (live ones only). */
+export async function clientProjectsOf(em: EntityManager, userId: string): Promise<ClientProject[]> {
+  const rows = await em.find(
+    ProjectClient,
+    { user: userId, project: { deletedAt: null } },
+    { populate: ['project', 'project.workshop'], orderBy: { project: { name: 'asc' } } },
+  );
+  return rows.map((r) => ({ project: { id: r.project.id, name: r.project.name }, workshop: { id: r.project.workshop.id, name: r.project.workshop.name } }));
 }

@@ -38,7 +38,7 @@ export function cuttingRouter(orm: Orm): Router {
 
   router.get('/frames/:frameId/cutting', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, req.params, 'params');
-    const { frame, role } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'read');
+    const { frame, role } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'shop.read');
     res.json(await cuttingState(orm.em, frame, role));
   });
 
@@ -46,7 +46,7 @@ export function cuttingRouter(orm: Orm): Router {
   router.post('/frames/:frameId/cutting', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, req.params, 'params');
     const userId = currentUserId(req);
-    const { frame, role } = await authorizeFrame(orm.em, userId, frameId, 'read');
+    const { frame, role } = await authorizeFrame(orm.em, userId, frameId, 'shop.read');
     if (!can(role, 'cuts.tick') && !can(role, 'frame.write')) throw new ForbiddenError('Only the shop or a designer can start cutting');
     const input = parseInput(startCuttingSchema, req.body);
     const existing = await latestSession(orm.em, frame.id);
@@ -82,7 +82,7 @@ export function cuttingRouter(orm: Orm): Router {
     const { frameId } = parseInput(frameIdParamsSchema, { frameId: req.params.frameId }, 'params');
     const doc = parseInput(z.object({ doc: z.enum(DOCS) }), { doc: req.params.doc }, 'params').doc;
     const q = parseInput(docQuerySchema, req.query, 'query');
-    const { frame } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'read');
+    const { frame } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'shop.read');
     const report = frameReport(frame);
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
     const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });

@@ -1,3 +1,5 @@
+import { Frame } from '../frames/frame.entity';
+import { recordActivity } from '../activity/activity.service';
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { can, type Role } from '@shared/api/roles';
@@ -97,6 +99,8 @@ export async function tick(em: EntityManager, frameId: string, userId: string, c
     .onConflict(['session', 'cutKey'])
     .ignore()
     .execute();
+  const frame = await em.findOne(Frame, { id: frameId }, { fields: ['name', 'project'] });
+  if (frame) await recordActivity(em, { projectId: frame.project.id, userId, kind: 'cuts.ticked', subject: frame.name, groupKey: frameId });
 }
 
 export async function untick(em: EntityManager, frameId: string, cutKey: string): Promise<void> {

@@ -32,7 +32,9 @@ export function framesRouter(orm: Orm): Router {
     const userId = currentUserId(req);
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
     const { deleted } = parseInput(listFramesQuerySchema, req.query, 'query');
-    await authorizeProject(orm.em, userId, projectId, 'read');
+    const { role } = await authorizeProject(orm.em, userId, projectId, 'read');
+    // The recovery list of deleted frames is the shop's, not a client's.
+    if (role === 'client' && deleted === 'true') return void res.json([] satisfies FrameSummary[]);
     res.json((await listFrameSummaries(orm.em, projectId, deleted === 'true')) satisfies FrameSummary[]);
   });
 

@@ -1,3 +1,4 @@
+import { recordActivity } from '../activity/activity.service';
 import { LockMode, type EntityManager } from '@mikro-orm/postgresql';
 import type { Frame as FrameDto, FrameDocumentJson, FrameSummary, Revision, RevisionSummary, SaveFrameDocumentResponse } from '@shared/api/frames';
 import type { UserRef } from '@shared/api/common';
@@ -133,6 +134,7 @@ export async function saveFrameDocument(
     frame.savedBy = tem.getReference(User, userId);
     await tem.flush();
     await touchProject(tem, frame.project.id, now);
+    await recordActivity(tem, { projectId: frame.project.id, userId, kind: 'frame.saved', subject: frame.name, groupKey: frame.id });
     return { version: frame.version, updatedAt: frame.updatedAt.toISOString() };
   });
 }

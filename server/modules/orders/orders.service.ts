@@ -1,3 +1,4 @@
+import { recordActivity } from '../activity/activity.service';
 import { randomBytes } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { OrderContents, OrderDetail, OrderSummary } from '@shared/api/shop';
@@ -71,12 +72,14 @@ export async function createOrder(em: EntityManager, workshopId: string, userId:
   const meta = await shopMeta(em, frame, report, { paper: input.paper });
   const order = orderList(plan.planned, supplier.currency, { cutFee: Number(supplier.cutFee) });
   const reference = newReference();
-  const text = orderText(order, input.mode, {
-    lengthText: (mm) => lengthText(mm, meta.units),
-    money: (v) => moneyText(v, supplier.currency),
+  const f = {
+    lengthText: (mm: number) => lengthText(mm, meta.units),
+    money: (v: number) => moneyText(v, supplier.currency),
     heading: `Order ${reference} from ${meta.workshop}\nFor: ${meta.project}, ${meta.frame} (revision ${meta.revision})`,
-  });
-  const contents: OrderContents = { meta, order, text, supplierName: supplier.name, supplierEmail: supplier.email };
+  };
+  const text = orderText(order, input.mode, f);
+  const supplierText = orderText(order, input.mode, { ...f, comparison: false });
+  const contents: OrderContents = { meta, order, text, supplierText, supplierName: supplier.name, supplierEmail: supplier.email };
   const o = em.create(Order, {
     workshop: em.getReference(Workshop, workshopId),
     frame,
@@ -92,8 +95,9 @@ export async function createOrder(em: EntityManager, workshopId: string, userId:
   return toOrderDetail(await findOrder(em, o.id));
 }
 
-export function orderPdf(o: OrderEntity): Promise<Buffer> {
-  return orderListPdf(o.contents.order, o.contents.meta, { supplier: o.contents.supplierName, reference: o.reference, mode: o.mode });
+/** The order list PDF; `forSupplier` leaves out the other way of buying and its prices (the shop's comparison). */
+export function orderPdf(o: OrderEntity, forSupplier = false): Promise<Buffer> {
+  return orderListPdf(o.contents.order, o.contents.meta, { supplier: o.contents.supplierName, reference: o.reference, mode: o.mode, forSupplier });
 }
 
 export function orderCsv(o: OrderEntity): string {
@@ -115,16 +119,18 @@ export async function sendOrder(em: EntityManager, orderId: string, userId: stri
   const supplier = o.supplier ? await em.findOne(Supplier, { id: o.supplier.id }) : null;
   const to = supplier?.email ?? o.contents.supplierEmail;
   try {
-    const pdf = await orderPdf(o);
+    const pdf = await orderPdf(o, true);
     const sent = await mailer.send({
       kind: 'order',
       to,
       subject: `Order ${o.reference}: ${o.contents.meta.project} (${o.contents.meta.workshop})`,
-      text: `${o.contents.text}\n\nThe order list is attached as a PDF.\n`,
+      text: `${o.contents.supplierText ?? o.contents.text.split('\n\nFor comparison')[0]}\n\nThe order list is attached as a PDF.\n`,
       workshopId: o.workshop.id,
       attachments: [{ filename: `order-${o.reference}.pdf`, content: pdf, contentType: 'application/pdf' }],
     });
     await em.nativeUpdate(Order, { id: orderId, status: 'sending' }, { status: 'sent', sentAt: new Date(), sentBy: userId, sentTo: to, messageId: sent.messageId });
+    const frame = o.frame ? await em.findOne(Frame, { id: o.frame.id }, { fields: ['project'] }) : null;
+    if (frame) await recordActivity(em, { projectId: frame.project.id, userId, kind: 'order.sent', subject: `${o.reference} to ${o.contents.supplierName}` });
   } catch (err) {
     const reason = err instanceof Error ? err.message : String(err);
     await em.nativeUpdate(Order, { id: orderId, status: 'sending' }, { status: 'draft', sendError: reason });

@@ -56,7 +56,8 @@ export async function projectDetail(em: EntityManager, project: ProjectEntity, r
     workshopId: project.workshop.id,
     name: project.name,
     client: project.client,
-    notes: project.notes,
+    // The notes are the shop's own; a client sees the design, not what the shop wrote about the job.
+    notes: role === 'client' ? '' : project.notes,
     role,
     updatedAt: project.updatedAt.toISOString(),
     createdAt: project.createdAt.toISOString(),

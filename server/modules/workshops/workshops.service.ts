@@ -1,6 +1,6 @@
 import { LockMode, raw, type EntityManager } from '@mikro-orm/postgresql';
 import type { Member, WorkshopSummary } from '@shared/api/workshops';
-import type { Role } from '@shared/api/roles';
+import type { Role, WorkshopRole } from '@shared/api/roles';
 import { ConflictError, NotFoundError, UnprocessableError } from '../../errors';
 import { toUserDto } from '../auth/auth.service';
 import { User } from '../users/user.entity';
@@ -52,7 +52,7 @@ export async function listMembers(em: EntityManager, workshopId: string): Promis
   return rows.map(toMember);
 }
 
-export async function addMember(em: EntityManager, workshopId: string, email: string, role: Role): Promise<Member> {
+export async function addMember(em: EntityManager, workshopId: string, email: string, role: WorkshopRole): Promise<Member> {
   const user = await em.findOne(User, { email });
   if (!user) throw new NotFoundError('User', { email: 'No account has this e-mail; ask them to sign up first' });
   if (await em.count(Membership, { workshop: workshopId, user: user.id })) {
@@ -89,7 +89,7 @@ async function changeMembership(
   });
 }
 
-export async function updateMemberRole(em: EntityManager, workshopId: string, userId: string, role: Role): Promise<Member> {
+export async function updateMemberRole(em: EntityManager, workshopId: string, userId: string, role: WorkshopRole): Promise<Member> {
   const m = await changeMembership(em, workshopId, userId, (x) => (x.role = role), () => role === 'owner');
   return toMember(m);
 }

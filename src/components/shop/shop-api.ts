@@ -84,6 +84,7 @@ export function useShopApi() {
       list: (projectId: string) => call<AttachmentView[]>('GET', `/projects/${projectId}/attachments`),
       add: (projectId: string, file: File) => upload<AttachmentView>(`/projects/${projectId}/attachments`, file),
       remove: (id: string) => call<void>('DELETE', `/attachments/${id}`),
+      share: (id: string, sharedWithClient: boolean) => call<AttachmentView>('PATCH', `/attachments/${id}`, { sharedWithClient }),
     },
     outbox: (workshopId: string) => call<OutboxList>('GET', `/workshops/${workshopId}/outbox`),
   };

@@ -61,7 +61,8 @@ export const DEMO = {
   owner: 'dana@slotwright.test',
   designer: 'rui@slotwright.test',
   cutter: 'sam@slotwright.test',
-  viewer: 'lee@slotwright.test',
+  viewer: 'jo@slotwright.test',
+  client: 'lee@slotwright.test',
 } as const;
 export const DEMO_PROJECT = 'Rear kitchen pod — short-wheelbase van';
 
