@@ -8,7 +8,8 @@ import { renderPdf } from './render';
 const SHEET_CAUTION =
   'Track and panel saws: wear eye and hearing protection and a dust mask, support both sides of every cut, keep the cord clear and follow the saw maker’s instructions.';
 
-export type SheetPlanMaterial = { material: string; thickness_mm: number; kerf: number; trim: number; plan: SheetPlan };
+/** `plan` is null when every part of the material is larger than the sheet; those are listed in `oversize`. */
+export type SheetPlanMaterial = { material: string; thickness_mm: number; kerf: number; trim: number; plan: SheetPlan | null; oversize?: string[] };
 
 /** The sheet drawn to scale: trim strips grey, parts light grey with their cut number marks, cuts as heavy lines numbered in order. */
 function diagram(s: PlannedSheet, width: number): Content {
@@ -65,14 +66,20 @@ export async function sheetPlanPdf(materials: SheetPlanMaterial[], meta: ShopMet
   const content: Content[] = [];
   if (!materials.length) content.push({ text: 'This frame has no drawers, faces, panels or countertop to cut from sheets.', margin: [0, 10, 0, 0] });
   materials.forEach((m, mi) => {
-    content.push({ text: [{ text: m.material }, { text: `   ${m.plan.sheetCount} sheet${m.plan.sheetCount === 1 ? '' : 's'}`, font: 'Barlow', fontSize: 10, color: MUTED }], style: 'h2', pageBreak: mi > 0 ? 'before' : undefined });
+    const count = m.plan?.sheetCount ?? 0;
+    content.push({ text: [{ text: m.material }, { text: `   ${count} sheet${count === 1 ? '' : 's'}`, font: 'Barlow', fontSize: 10, color: MUTED }], style: 'h2', pageBreak: mi > 0 ? 'before' : undefined });
+    if (m.oversize?.length) {
+      content.push({ text: `Larger than the sheet, not planned (join two pieces, or buy them whole): ${m.oversize.join('; ')}.`, bold: true, margin: [0, 0, 0, 6] });
+    }
+    if (!m.plan) return;
+    const plan = m.plan;
     content.push(
       facts([
         ['Kerf', len(m.kerf)],
         ['Trim', len(m.trim)],
-        ['Sheets', String(m.plan.sheetCount)],
-        ['Lower bound', String(m.plan.lowerBound)],
-        ['Waste', `${m.plan.waste_pct.toFixed(1)} %`],
+        ['Sheets', String(plan.sheetCount)],
+        ['Lower bound', String(plan.lowerBound)],
+        ['Waste', `${plan.waste_pct.toFixed(1)} %`],
       ]),
     );
     content.push({
@@ -80,10 +87,10 @@ export async function sheetPlanPdf(materials: SheetPlanMaterial[], meta: ShopMet
       style: 'caution',
       margin: [0, 0, 0, 4],
     });
-    m.plan.sheets.forEach((s, si) => {
+    plan.sheets.forEach((s, si) => {
       content.push({
         stack: [
-          { text: [{ text: `Sheet ${si + 1} of ${m.plan.sheetCount}`, font: 'BarlowBold', fontSize: 12 }, { text: `   ${len(s.length)} × ${len(s.width)}${s.label ? ` · ${s.label}` : ''} · ${s.used_pct.toFixed(0)} % used`, color: MUTED }], margin: [0, 6, 0, 0] },
+          { text: [{ text: `Sheet ${si + 1} of ${plan.sheetCount}`, font: 'BarlowBold', fontSize: 12 }, { text: `   ${len(s.length)} × ${len(s.width)}${s.label ? ` · ${s.label}` : ''} · ${s.used_pct.toFixed(0)} % used`, color: MUTED }], margin: [0, 6, 0, 0] },
           diagram(s, width),
         ],
         unbreakable: true,

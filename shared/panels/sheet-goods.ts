@@ -132,18 +132,23 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
     const min = { x: Math.min(...ms.map((m) => m.min_mm.x)), y: Math.min(...ms.map((m) => m.min_mm.y)) };
     const max = { x: Math.max(...ms.map((m) => m.max_mm.x)), y: Math.max(...ms.map((m) => m.max_mm.y)), z: Math.max(...ms.map((m) => m.max_mm.z)) };
     const sink = report.modules.find((m) => m.kind === 'sink');
-    const top = countertop({
-      run: { length_mm: max.x - min.x, depth_mm: max.y - min.y },
-      thickness_mm: opts.top.thickness_mm,
-      ...(sink ? { sink: { x_mm: sink.min_mm.x - min.x, y_mm: sink.min_mm.y - min.y, w_mm: sink.max_mm.x - sink.min_mm.x, d_mm: sink.max_mm.y - sink.min_mm.y } } : {}),
-    });
-    const cut = top.cutout ? top.cutout.length_mm * top.cutout.width_mm : 0;
-    add(top.part, opts.top, 'countertop', { x: (min.x + max.x) / 2, y: (min.y + max.y) / 2, z: max.z + opts.top.thickness_mm / 2 });
-    boxes.push({ id: 'countertop', kind: 'top', min_mm: { x: min.x, y: max.y - top.part.width_mm, z: max.z }, max_mm: { x: max.x, y: max.y, z: max.z + opts.top.thickness_mm } });
-    // The cut-out's offcut is not on the top: take its mass off (area fraction).
-    const last = parts[parts.length - 1];
-    last.mass_kg *= 1 - cut / (top.part.length_mm * top.part.width_mm);
-    notes.push(...top.notes);
+    try {
+      const top = countertop({
+        run: { length_mm: max.x - min.x, depth_mm: max.y - min.y },
+        thickness_mm: opts.top.thickness_mm,
+        ...(sink ? { sink: { x_mm: sink.min_mm.x - min.x, y_mm: sink.min_mm.y - min.y, w_mm: sink.max_mm.x - sink.min_mm.x, d_mm: sink.max_mm.y - sink.min_mm.y } } : {}),
+      });
+      const cut = top.cutout ? top.cutout.length_mm * top.cutout.width_mm : 0;
+      add(top.part, opts.top, 'countertop', { x: (min.x + max.x) / 2, y: (min.y + max.y) / 2, z: max.z + opts.top.thickness_mm / 2 });
+      boxes.push({ id: 'countertop', kind: 'top', min_mm: { x: min.x, y: max.y - top.part.width_mm, z: max.z }, max_mm: { x: max.x, y: max.y, z: max.z + opts.top.thickness_mm } });
+      // The cut-out's offcut is not on the top: take its mass off (area fraction).
+      const last = parts[parts.length - 1];
+      last.mass_kg *= 1 - cut / (top.part.length_mm * top.part.width_mm);
+      notes.push(...top.notes);
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      notes.push(`Countertop: not sized — ${err.message}`);
+    }
   }
   const total = parts.reduce((a, p) => a + p.mass_kg, 0);
   const cog = total > 0 ? (['x', 'y', 'z'] as const).reduce((c, k) => ({ ...c, [k]: parts.reduce((a, p) => a + p.mass_kg * p.centre_mm[k], 0) / total }), { x: 0, y: 0, z: 0 } as Vec3) : null;

@@ -1,10 +1,11 @@
 // Sheet jobs from a frame's sheet goods: one job per material (parts of one thickness and face come off the same
 // sheets), grain kept on every part that shows it.
 import type { PlacedPart } from '../panels/sheet-goods';
-import type { SheetJob } from './job';
+import { fitsSheet, type SheetJob } from './job';
 
 export type SheetStock = { length: number; width: number; price?: number; qty?: number | null; label?: string };
-export type MaterialJob = { materialId: string; material: string; thickness_mm: number; job: SheetJob };
+/** `oversize`: parts larger than every sheet (after trim), left out of the job: join two pieces or buy them whole. */
+export type MaterialJob = { materialId: string; material: string; thickness_mm: number; job: SheetJob; oversize: string[] };
 
 /** Common practice (REFERENCES.md "Sheet goods"): 2440 × 1220 mm sheets, a track-saw kerf of about 3 mm, 10 mm trim. */
 export const DEFAULT_SHEET: SheetStock = { length: 2440, width: 1220 };
@@ -15,15 +16,17 @@ export function sheetJobsFromParts(parts: readonly PlacedPart[], opts: { sheets?
   const by = new Map<string, PlacedPart[]>();
   for (const p of parts) by.set(p.material.id, [...(by.get(p.material.id) ?? []), p]);
   const round = (v: number): number => Math.round(v * 10) / 10;
-  return [...by].map(([id, ps]) => ({
-    materialId: id,
-    material: ps[0].material.name,
-    thickness_mm: ps[0].material.thickness_mm,
-    job: {
-      kerf: opts.kerf ?? DEFAULT_SHEET_KERF,
-      trim: opts.trim ?? DEFAULT_SHEET_TRIM,
-      sheets: opts.sheets ?? [DEFAULT_SHEET],
-      parts: ps.map((p) => ({ length: round(p.length_mm), width: round(p.width_mm), qty: p.qty, label: p.name.slice(0, 120), grain: p.grain })),
-    },
-  }));
+  const trim = opts.trim ?? DEFAULT_SHEET_TRIM;
+  const sheets = opts.sheets ?? [DEFAULT_SHEET];
+  return [...by].map(([id, ps]) => {
+    const parts = ps.map((p) => ({ length: round(p.length_mm), width: round(p.width_mm), qty: p.qty, label: p.name.slice(0, 120), grain: p.grain }));
+    const fits = (p: (typeof parts)[number]) => sheets.some((s) => s.qty !== 0 && fitsSheet(p, s, trim));
+    return {
+      materialId: id,
+      material: ps[0].material.name,
+      thickness_mm: ps[0].material.thickness_mm,
+      job: { kerf: opts.kerf ?? DEFAULT_SHEET_KERF, trim, sheets, parts: parts.filter(fits) },
+      oversize: parts.filter((p) => !fits(p)).map((p) => `${p.label} (${p.length} × ${p.width} mm)`),
+    };
+  });
 }

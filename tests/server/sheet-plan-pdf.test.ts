@@ -19,15 +19,24 @@ describe('printed sheet plan', () => {
     const buf = await sheetPlanPdf(plans, meta);
     expect(buf.subarray(0, 5).toString()).toBe('%PDF-');
     const { text } = await pdfText(buf);
-    for (const m of plans) {
-      expect(text).toContain(m.material);
-      m.plan.sheets.forEach((_, i) => expect(text).toContain(`Sheet ${i + 1} of ${m.plan.sheetCount}`));
-    }
-    const labels = new Set(plans.flatMap((m) => m.plan.sheets.flatMap((s) => s.placements.map((p) => p.label))));
+    const planned = plans.flatMap((m) => (m.plan ? [m.plan] : []));
+    expect(planned).toHaveLength(plans.length);
+    for (const m of plans) expect(text).toContain(m.material);
+    for (const p of planned) p.sheets.forEach((_, i) => expect(text).toContain(`Sheet ${i + 1} of ${p.sheetCount}`));
+    const labels = new Set(planned.flatMap((p) => p.sheets.flatMap((s) => s.placements.map((x) => x.label))));
     for (const l of labels) expect(text).toContain(l);
-    const cuts = plans.reduce((a, m) => a + m.plan.sheets.reduce((b, s) => b + s.cuts.filter((c) => c.kind === 'trim').length, 0), 0);
+    const cuts = planned.reduce((a, p) => a + p.sheets.reduce((b, s) => b + s.cuts.filter((c) => c.kind === 'trim').length, 0), 0);
     expect(text.match(/\btrim\b/g)?.length ?? 0).toBeGreaterThanOrEqual(cuts);
     expect(text).toContain('eye and hearing protection');
+  });
+  it('a countertop longer than the sheet (a 2.6 m run) is listed as not planned, and the rest is still planned', async () => {
+    const long = parseCabinetSpec({ ...spec, bays: [...spec.bays, { id: 'bay-extra', width_mm: 900 }] });
+    const plans = frameSheetPlans(computeReport(buildCabinetRun(long)), 200);
+    const top = plans.find((m) => m.oversize.some((o) => o.startsWith('Countertop')));
+    expect(top).toBeDefined();
+    const { text } = await pdfText(await sheetPlanPdf(plans, meta));
+    expect(text).toContain('Larger than the sheet, not planned');
+    expect(plans.some((m) => m.plan && m.plan.sheetCount > 0)).toBe(true);
   });
   it('a frame with no bays prints that there is nothing to cut from sheets', async () => {
     const { text } = await pdfText(await sheetPlanPdf(frameSheetPlans({ ...report, bays: [] }), meta));
