@@ -13,9 +13,9 @@ import { loadavg } from 'node:os';
 import { chromium, type Page } from 'playwright-core';
 import { projectBox, VIEWS } from '@shared/editing/views';
 import { computeReport, type FrameReport } from '@shared/engine/report';
-import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { buildClient, prepareDatabase, startServer, stopProcess, waitForHealth } from './lib/app-env';
+import { benchFrame } from './lib/bench-frame';
 import { quantile } from './lib/stats';
 
 const PORT = Number(process.env.BENCH_PORT ?? 3921);
@@ -25,28 +25,6 @@ const DATABASE = 'slotwright_bench_editor';
 const MOVE_EVERY_MS = 16;
 const DRAG_STEPS = 40;
 const DEMO_PROJECT = 'Rear kitchen pod — short-wheelbase van';
-
-/** A long cabinet run: bays alternating base modules and side-rail drawers, 10 members a bay (+4). */
-function benchFrame(bays: number): FrameDocument {
-  const list: CabinetBay[] = [];
-  for (let k = 0; k < bays; k++) {
-    const base = k % 2 === 0;
-    list.push({
-      id: `bay-${k}`,
-      module: {
-        id: `module-${k}`,
-        name: base ? `Cooler ${k}` : `Drawers ${k}`,
-        kind: base ? 'appliance' : 'drawer-stack',
-        bearing: base ? 'base' : 'side-rails',
-        size: { w_mm: 300 + ((k * 37) % 200), d_mm: 400, h_mm: base ? 420 : 300 },
-        mass_kg: base ? 15 : 8,
-        contents_kg: base ? 15 : 10,
-        raise_mm: base ? 0 : 100,
-      },
-    });
-  }
-  return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
-}
 
 // Installed before any page script runs: the observers see everything from navigation on. Passed as text, so the
 // page never sees helpers the TypeScript loader adds to named functions.
