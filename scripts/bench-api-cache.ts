@@ -75,11 +75,11 @@ async function main(): Promise<void> {
 
     const me = (rows[0].rps + rows[rows.length - 1].rps) / 2;
     console.log(`\nAPI reads on loopback, autocannon 4 connections × ${seconds} s each, ${doc.members.length}-member frame, ${new Date().toISOString()}`);
-    console.log(`| ${'route'.padEnd(42)} |   req/s | × auth/me | p50 ms | p99 ms | errors | load  |`);
-    console.log(`|${'-'.repeat(44)}|---------|-----------|--------|--------|--------|-------|`);
+    console.log(`| ${'route'.padEnd(42)} |   req/s | × auth/me | p50 ms | p99 ms | kB each | errors | load  |`);
+    console.log(`|${'-'.repeat(44)}|---------|-----------|--------|--------|---------|--------|-------|`);
     for (const r of rows) {
       console.log(
-        `| ${r.name.padEnd(42)} | ${r.rps.toFixed(0).padStart(7)} | ${(r.rps / me).toFixed(2).padStart(9)} | ${String(r.p50).padStart(6)} | ${String(r.p99).padStart(6)} | ${String(r.errors).padStart(6)} | ${r.load.toFixed(2)} |`,
+        `| ${r.name.padEnd(42)} | ${r.rps.toFixed(0).padStart(7)} | ${(r.rps / me).toFixed(2).padStart(9)} | ${String(r.p50).padStart(6)} | ${String(r.p99).padStart(6)} | ${(r.bytes / 1000).toFixed(1).padStart(7)} | ${String(r.errors).padStart(6)} | ${r.load.toFixed(2)} |`,
       );
     }
     const goal = (i: number) => (rows[i].rps / me >= 0.5 ? 'ok' : 'BELOW');
