@@ -2,11 +2,13 @@ import { fileURLToPath, URL } from 'node:url';
 import { defineConfig } from 'vitest/config';
 import vue from '@vitejs/plugin-vue';
 import vuetify from 'vite-plugin-vuetify';
+import { compression } from 'vite-plugin-compression2';
 
 const apiPort = Number(process.env.PORT ?? 3000);
 
 export default defineConfig({
-  plugins: [vue(), vuetify({ autoImport: false })],
+  // Brotli and gzip copies of every text asset, made once at build time; the server sends the one the browser takes.
+  plugins: [vue(), vuetify({ autoImport: false }), compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024 })],
   resolve: {
     alias: {
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),

@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import express, { type Express, type RequestHandler } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
 import type session from 'express-session';
 import { RequestContext } from '@mikro-orm/core';
@@ -41,15 +42,37 @@ const defaultLogger: ErrorLogger = (message, err) => {
   console.error(message, err);
 };
 
+/** Hashed build output: a new build gives new names, so a copy never needs checking again. */
+export const IMMUTABLE = 'public, max-age=31536000, immutable';
+/** index.html and other unhashed files: always asked again (cheap with the ETag), so a new build shows at once. */
+export const REVALIDATE = 'no-cache';
+
+/**
+ * The built client, served as the brotli or gzip copy made at build time when the browser takes one (see
+ * vite.config.ts), with cache headers by kind of file; any other page address gets index.html (the router's).
+ */
 function clientFiles(dir: string): RequestHandler[] {
   const root = resolve(dir);
   const index = resolve(root, 'index.html');
   if (!existsSync(index)) return [];
+  const assets = resolve(root, 'assets');
+  const files = expressStaticGzip(root, {
+    enableBrotli: true,
+    orderPreference: ['br', 'gzip'],
+    index: 'index.html',
+    serveStatic: {
+      cacheControl: false,
+      setHeaders: (res, path) => res.setHeader('Cache-Control', resolve(path).startsWith(assets) ? IMMUTABLE : REVALIDATE),
+    },
+  });
   const spaFallback: RequestHandler = (req, res, next) => {
     if ((req.method !== 'GET' && req.method !== 'HEAD') || req.path.startsWith('/api/') || req.path === '/api') return next();
-    res.sendFile(index);
+    // A missing hashed file is a 404, not the app: a stale page asking for an old chunk must see it fail.
+    if (req.path.startsWith('/assets/')) return next();
+    req.url = '/index.html';
+    files(req, res, next);
   };
-  return [express.static(root, { index: 'index.html', maxAge: '1h' }), spaFallback];
+  return [files, spaFallback];
 }
 
 /** Builds the HTTP app; listening, and closing the ORM and pools, are the caller's business. */

@@ -7,7 +7,7 @@ import { existsSync, mkdirSync, readdirSync, chmodSync, chownSync } from 'node:f
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import pg from 'pg';
-import { aptInstall, capture, isRoot, sh } from './run.ts';
+import { aptInstall, capture, isRoot, logged, logPath } from './run.ts';
 
 export const projectRoot = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 export const appUser = 'slotwright';
@@ -46,8 +46,9 @@ function serverCommand(cmd: string, args: string[]): [string, string[]] {
   return isRoot() ? ['runuser', ['-u', 'postgres', '--', cmd, ...args]] : [cmd, args];
 }
 
+/** Runs a server program; its output goes to .data/logs/postgres.log (the server's own log is `logFile`). */
 function asServerUser(cmd: string, args: string[]): void {
-  sh(...serverCommand(cmd, args), { cwd: '/' });
+  logged('postgres', ...serverCommand(cmd, args), { cwd: '/' });
 }
 
 function serverUserCanReach(dir: string): boolean {
@@ -120,6 +121,7 @@ export function startCluster(): { cluster: Cluster; started: boolean } {
   if (isRunning(c)) return { cluster: c, started: false };
   const opts = `-p ${c.port} -k ${c.socketDir} -c listen_addresses=127.0.0.1`;
   asServerUser(join(bin, 'pg_ctl'), ['-D', c.data, '-l', c.logFile, '-o', opts, '-w', '-t', '60', 'start']);
+  console.log(`Started the local PostgreSQL cluster on 127.0.0.1:${c.port} (set-up output in ${logPath('postgres')})`);
   return { cluster: c, started: true };
 }
 
@@ -129,6 +131,7 @@ export function stopCluster(c: Cluster = { ...clusterPaths(), bin: findBin() ?? 
     return;
   }
   asServerUser(join(c.bin, 'pg_ctl'), ['-D', c.data, '-m', 'fast', '-w', 'stop']);
+  console.log('Stopped the local PostgreSQL cluster.');
 }
 
 export function databaseUrl(c: Cluster, database: string): string {

@@ -4,13 +4,14 @@ import type { Frame, VersionConflictCurrent } from '@shared/api';
 import { applyChange, diffDocuments, isEmptyChange, touchedIds, type Change } from '@shared/editing/change';
 import { createHistory } from '@shared/editing/history';
 import { emptyScene, type Scene } from '@shared/editing/scene';
-import { sceneFromReport } from '@shared/editing/scene-from-report';
-import { diffReports, type WhatChanged } from '@shared/engine/diff';
-import { computeReport, type FrameReport } from '@shared/engine/report';
+import { sceneFromDocument } from '@shared/editing/scene-from-document';
+import type { WhatChanged } from '@shared/engine/diff';
+import type { FrameReport } from '@shared/engine/report';
 import { InputError } from '@shared/errors';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
 import { useApi } from '@/api';
+import { createReportClient, defaultReportPort, type ReportAnswer, type ReportFailure } from '@/workers/report-client';
 import { useDocumentSaving } from './document-saving';
 import { useNoticesStore } from './notices';
 
@@ -27,10 +28,15 @@ export type ApplyOptions = {
   select?: Selection;
 };
 
+/** The engine could not work out the results for the document as it stands (shown until the next report). */
+export type EngineError = { message: string; field: string | null };
+
 /**
  * The open frame: its document, the engine's report on it, the selection, and the history. Every edit goes
- * through `apply(change)`: the engine runs on the new document first, and a document it cannot resolve is
- * refused with the reason, leaving the last good one in place. Saving is in document-saving.ts.
+ * through `apply(change)`: the new document's references are resolved first, and one that cannot be resolved is
+ * refused with the reason, leaving the last good one in place. The scene is drawn from the applied document at
+ * once; the full report (cut list, hardware, loads, marks) is worked out in a Web Worker and follows, answers for
+ * documents since replaced being dropped (see report-client.ts). Saving is in document-saving.ts.
  */
 export const useDocumentStore = defineStore('document', () => {
   const api = useApi();
@@ -47,6 +53,11 @@ export const useDocumentStore = defineStore('document', () => {
   const summary = shallowRef<{ label: string; changes: WhatChanged } | null>(null);
   /** How long the last engine run took (ms): the results panels debounce when it is slow. */
   const engineMs = ref(0);
+  /** The report for the document as it stands is still being worked out. */
+  const checking = ref(false);
+  const engineError = shallowRef<EngineError | null>(null);
+  /** The label of the change whose "what changed" summary the next report brings. */
+  let summaryLabel: { revision: number; label: string } | null = null;
   /** Bumped on every applied change, so views can watch one number. */
   const revision = ref(0);
 
@@ -62,12 +73,27 @@ export const useDocumentStore = defineStore('document', () => {
     current: () => (frameId.value && doc.value ? { frameId: frameId.value, doc: doc.value } : null),
   });
 
-  function run(next: FrameDocument): { report: FrameReport; scene: Scene } {
-    const t0 = performance.now();
-    const r = computeReport(next, report.value ? { previous: report.value } : {});
-    const s = sceneFromReport(next, r);
-    engineMs.value = performance.now() - t0;
-    return { report: r, scene: s };
+  function onReport(a: ReportAnswer): void {
+    report.value = a.report;
+    scene.value = a.scene;
+    engineMs.value = a.ms;
+    engineError.value = null;
+    checking.value = false;
+    if (summaryLabel?.revision === a.revision && a.changes) summary.value = { label: summaryLabel.label, changes: a.changes };
+    summaryLabel = null;
+    keepSelectionValid(a.scene);
+  }
+  function onEngineError(f: ReportFailure): void {
+    engineError.value = { message: f.message, field: f.field };
+    checking.value = false;
+    summaryLabel = null;
+  }
+  const reports = createReportClient({ port: defaultReportPort, onReport, onError: onEngineError });
+
+  function requestReport(opts: { reset?: boolean; summarise?: boolean } = {}): void {
+    if (!doc.value) return;
+    checking.value = true;
+    reports.request(revision.value, doc.value, opts);
   }
 
   /** Open a frame as loaded from the server. */
@@ -86,13 +112,13 @@ export const useDocumentStore = defineStore('document', () => {
     summary.value = null;
     refusal.value = null;
     report.value = null;
+    engineError.value = null;
+    summaryLabel = null;
     readOnly.value = !canWrite;
     try {
       const parsed = parseFrameDocument(frame.document);
-      const result = run(parsed);
+      scene.value = sceneFromDocument(parsed, null);
       doc.value = parsed;
-      report.value = result.report;
-      scene.value = result.scene;
       loadError.value = null;
     } catch (e) {
       doc.value = null;
@@ -102,6 +128,8 @@ export const useDocumentStore = defineStore('document', () => {
     }
     saving.reset(frame.version, doc.value);
     revision.value++;
+    if (doc.value) requestReport({ reset: true });
+    else reports.cancel();
   }
 
   function close(): void {
@@ -109,6 +137,9 @@ export const useDocumentStore = defineStore('document', () => {
     frameId.value = null;
     doc.value = null;
     report.value = null;
+    reports.cancel();
+    checking.value = false;
+    engineError.value = null;
     scene.value = emptyScene();
     history.clear();
     selection.value = NOTHING;
@@ -126,24 +157,24 @@ export const useDocumentStore = defineStore('document', () => {
   function commit(change: Change, opts: ApplyOptions): boolean {
     if (!doc.value || isEmptyChange(change)) return false;
     const next = applyChange(doc.value, change);
-    const before = report.value;
-    let result: { report: FrameReport; scene: Scene };
+    let drawn: Scene;
     try {
-      result = run(next);
+      drawn = sceneFromDocument(next, scene.value);
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       refusal.value = { label: change.label, message: e.message, field: e.field };
       return false;
     }
     doc.value = next;
-    report.value = result.report;
-    scene.value = result.scene;
+    scene.value = drawn;
     refusal.value = null;
     // A summary describes the last re-lay only; any other change makes it stale.
-    summary.value = opts.summarise && before ? { label: change.label, changes: diffReports(before, result.report) } : null;
+    summary.value = null;
     if (opts.select) selection.value = opts.select;
-    keepSelectionValid(result.scene);
+    keepSelectionValid(drawn);
     revision.value++;
+    summaryLabel = opts.summarise ? { revision: revision.value, label: change.label } : null;
+    requestReport({ summarise: opts.summarise });
     saving.schedule();
     return true;
   }
@@ -255,6 +286,8 @@ export const useDocumentStore = defineStore('document', () => {
     refusal,
     summary,
     engineMs,
+    checking,
+    engineError,
     revision,
     canUndo,
     canRedo,

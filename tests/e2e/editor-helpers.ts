@@ -90,8 +90,14 @@ export function itemInView(report: FrameReport, view: ViewId, id: string) {
   return projectBox(VIEWS[view], { min: [m.min_mm.x, m.min_mm.y, m.min_mm.z], max: [m.max_mm.x, m.max_mm.y, m.max_mm.z] });
 }
 
+/** Waits until the results are worked out for the frame as drawn (they follow each edit from a Web Worker). */
+export async function resultsSettled(page: Page): Promise<void> {
+  await page.locator('.frame-editor__status').filter({ hasText: /checked in/ }).waitFor();
+}
+
 /** The cut list's rows as [mark, profile, cut length, qty]. */
 export async function cutListRows(page: Page): Promise<string[][]> {
+  await resultsSettled(page);
   await page.getByRole('tab', { name: 'Cut list' }).click();
   const rows = page.getByRole('table', { name: 'Cut list' }).locator('tbody tr');
   await rows.first().waitFor();
@@ -100,6 +106,7 @@ export async function cutListRows(page: Page): Promise<string[][]> {
 
 /** Picks a member from the part panel's list (the keyboard and screen-reader way) and reads a field of it. */
 export async function pickMember(page: Page, id: string): Promise<void> {
+  await resultsSettled(page);
   await page.getByRole('tab', { name: 'Part' }).click();
   const back = page.getByRole('button', { name: '← All members' });
   if (await back.count()) await back.click();

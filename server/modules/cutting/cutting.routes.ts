@@ -16,10 +16,13 @@ import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '
 import { frameSheetPlans } from '../orders/sheet-plans';
 import { parseInput } from '../../validate';
 import { authorizeFrame } from '../access/access.service';
-import { frameReport, planFrame, shopMeta, supplierFor } from '../orders/frame-shop.service';
+import { frameReport, planFrame, shelfOf, shopMeta, supplierFor, today } from '../orders/frame-shop.service';
 import { sendFile } from '../orders/orders.routes';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
-import { cuttingState, latestSession, startSession, tick, untick } from './cutting.service';
+import { cuttingState, latestSession, latestSessionKey, startSession, tick, untick } from './cutting.service';
+import { createShopCache, type ShopFile } from './shop-cache';
+import { frameHead, type FrameFacts } from '../frames/frame-read';
+import type { SupplierEntity } from '../suppliers/supplier.entity';
 import { can } from '@shared/api/roles';
 
 const DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv', 'sheet-plan.pdf'] as const;
@@ -78,40 +81,70 @@ export function cuttingRouter(orm: Orm): Router {
 
   // Printed documents and CSV for a frame. The saw list follows the frozen cutting plan when cutting has started on
   // this version, so paper and tablet show the same bars.
+  // Each document is made once per (frame version, settings, what it prints) and then served from the cache: the
+  // key is worked out from small queries, and only a miss loads the document and runs the engine and planner.
+  const cache = createShopCache();
   router.get('/frames/:frameId/shop/:doc', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, { frameId: req.params.frameId }, 'params');
     const doc = parseInput(z.object({ doc: z.enum(DOCS) }), { doc: req.params.doc }, 'params').doc;
     const q = parseInput(docQuerySchema, req.query, 'query');
-    const { frame } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'shop.read');
-    const report = frameReport(frame);
+    const userId = currentUserId(req);
+    const head = await frameHead(orm.em, userId, frameId, 'shop.read');
+    const mayUsePlan = doc === 'saw-list.pdf' || doc === 'order-list.csv';
+    const [supplier, shelf, session] = mayUsePlan
+      ? await Promise.all([supplierFor(orm.em, head.workshopId, q.supplierId), shelfOf(orm.em, head.workshopId), doc === 'saw-list.pdf' ? latestSessionKey(orm.em, frameId) : null])
+      : [null, null, null];
+    const settings = {
+      doc,
+      q,
+      printed: [head.name, head.projectName, head.workshopName, today()],
+      supplier: supplier ? [supplier.id, supplier.updatedAt.toISOString()] : null,
+      shelf,
+      session,
+    };
+    const made = await cache.file(head, settings, () => makeShopFile(userId, head, doc, q, supplier));
+    sendFile(res, made.file.body, made.file.type, made.file.filename);
+  });
+
+  async function makeShopFile(
+    userId: string,
+    head: FrameFacts,
+    doc: (typeof DOCS)[number],
+    q: z.infer<typeof docQuerySchema>,
+    supplierFound: SupplierEntity | null,
+  ): Promise<ShopFile> {
+    const { frame } = await authorizeFrame(orm.em, userId, head.id, 'shop.read');
+    const report = cache.report(head, () => frameReport(frame));
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
     const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
     const base = `${frame.name}-r${frame.version}`;
     const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
     if (doc === 'sheet-plan.pdf') {
-      return sendFile(res, await sheetPlanPdf(frameSheetPlans(report), meta), 'application/pdf', `${base}-sheet-plan.pdf`);
+      return file(await sheetPlanPdf(frameSheetPlans(report), meta), 'application/pdf', `${base}-sheet-plan.pdf`);
     }
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
     const needsPlan = (doc === 'saw-list.pdf' && !frozen) || doc === 'order-list.csv';
-    const supplier = needsPlan ? await supplierFor(orm.em, frame.project.workshop.id, q.supplierId) : null;
+    const supplier = needsPlan ? supplierFound : null;
     const planned = needsPlan ? await planFrame(orm.em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS }) : null;
     const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
     switch (doc) {
       case 'saw-list.pdf':
-        return sendFile(res, await sawListPdf(sawSheet(cutList, frozen?.plans ?? planned!.plans, meta)), 'application/pdf', `${base}-saw-list.pdf`);
+        return file(await sawListPdf(sawSheet(cutList, frozen?.plans ?? planned!.plans, meta)), 'application/pdf', `${base}-saw-list.pdf`);
       case 'drill-list.pdf':
-        return sendFile(res, await drillListPdf(drillSheet(cutList, meta.units), meta), 'application/pdf', `${base}-drill-list.pdf`);
+        return file(await drillListPdf(drillSheet(cutList, meta.units), meta), 'application/pdf', `${base}-drill-list.pdf`);
       case 'pick-list.pdf':
-        return sendFile(res, await pickListPdf(pickSheet(cutList), meta), 'application/pdf', `${base}-pick-list.pdf`);
+        return file(await pickListPdf(pickSheet(cutList), meta), 'application/pdf', `${base}-pick-list.pdf`);
       case 'labels.pdf':
-        return sendFile(res, await labelsPdf(partLabels(cutList, meta), meta), 'application/pdf', `${base}-labels.pdf`);
+        return file(await labelsPdf(partLabels(cutList, meta), meta), 'application/pdf', `${base}-labels.pdf`);
       case 'cut-list.csv':
-        return sendFile(res, cutListCsv(cutList, meta.units), 'text/csv; charset=utf-8', `${base}-cut-list.csv`);
+        return file(cutListCsv(cutList, meta.units), 'text/csv; charset=utf-8', `${base}-cut-list.csv`);
       case 'order-list.csv':
-        return sendFile(res, orderListCsv(orderList(planned!.planned, supplier?.currency ?? 'EUR', { cutFee: Number(supplier?.cutFee ?? 0) })), 'text/csv; charset=utf-8', `${base}-order-list.csv`);
+        return file(orderListCsv(orderList(planned!.planned, supplier?.currency ?? 'EUR', { cutFee: Number(supplier?.cutFee ?? 0) })), 'text/csv; charset=utf-8', `${base}-order-list.csv`);
     }
-  });
+  }
 
   return router;
 }
+
+const file = (body: Buffer | string, type: string, filename: string): ShopFile => ({ body, type, filename });

@@ -20,6 +20,14 @@ export async function latestSession(em: EntityManager, frameId: string): Promise
   return em.findOne(CutSession, { frame: frameId }, { orderBy: { startedAt: 'desc' }, populate: ['startedBy'], refresh: true });
 }
 
+/** The live session's id and frame version, without its plan: enough to tell whether a saved saw list still holds. */
+export async function latestSessionKey(em: EntityManager, frameId: string): Promise<string | null> {
+  const rows = await em
+    .getConnection()
+    .execute<{ id: string; frame_version: number }[]>('select id, frame_version from cut_sessions where frame_id = ? order by started_at desc limit 1', [frameId]);
+  return rows[0] ? `${rows[0].id}@${rows[0].frame_version}` : null;
+}
+
 /** Which planned cuts exist in a session, by key, with their mark. */
 function cutIndex(plan: CutSessionPlan): Map<string, string> {
   const keys = new Map<string, string>();

@@ -13,10 +13,10 @@ import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
 import { authorizeFrame, authorizeProject } from '../access/access.service';
+import { frameDocumentText, frameEtag, frameHead, frameJson, notModified } from './frame-read';
 import {
   createFrame,
   deleteFrame,
-  getFrame,
   getRevision,
   listFrameSummaries,
   listRevisions,
@@ -49,8 +49,16 @@ export function framesRouter(orm: Orm): Router {
   router.get('/frames/:frameId', async (req, res) => {
     const userId = currentUserId(req);
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
-    const { frame, role } = await authorizeFrame(orm.em, userId, frameId, 'read');
-    res.json((await getFrame(orm.em, frame, role)) satisfies Frame);
+    const head = await frameHead(orm.em, userId, frameId);
+    const etag = frameEtag(head);
+    res.setHeader('ETag', etag);
+    // Kept by the browser for this user only, and checked with the server before each use.
+    res.setHeader('Cache-Control', 'private, no-cache');
+    if (notModified(req, etag)) {
+      res.status(304).end();
+      return;
+    }
+    res.type('application/json').send(frameJson(head, await frameDocumentText(orm.em, frameId)));
   });
 
   router.patch('/frames/:frameId', async (req, res) => {

@@ -1,0 +1,27 @@
+import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
+import type { FrameDocument } from '@shared/model/frame-document';
+
+// The benchmarks' generated frame, invented for them: one long cabinet run.
+
+/** A long cabinet run: bays alternating base modules and side-rail drawers, 10 members a bay (+4). */
+export function benchFrame(bays = 50): FrameDocument {
+  const list: CabinetBay[] = [];
+  for (let k = 0; k < bays; k++) {
+    const base = k % 2 === 0;
+    list.push({
+      id: `bay-${k}`,
+      module: {
+        id: `module-${k}`,
+        name: base ? `Cooler ${k}` : `Drawers ${k}`,
+        kind: base ? 'appliance' : 'drawer-stack',
+        bearing: base ? 'base' : 'side-rails',
+        size: { w_mm: 300 + ((k * 37) % 200), d_mm: 400, h_mm: base ? 420 : 300 },
+        mass_kg: base ? 15 : 8,
+        contents_kg: base ? 15 : 10,
+        raise_mm: base ? 0 : 100,
+      },
+    });
+  }
+  return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
+}
+

@@ -1,0 +1,40 @@
+// What the report worker does for each request, kept apart from the worker's plumbing so that it also runs in
+// process (where there are no workers) and under test.
+import { sceneFromReport } from '@shared/editing/scene-from-report';
+import type { Scene } from '@shared/editing/scene';
+import { diffReports, type WhatChanged } from '@shared/engine/diff';
+import { computeReport, type FrameReport } from '@shared/engine/report';
+import { InputError } from '@shared/errors';
+import type { FrameDocument } from '@shared/model/frame-document';
+
+export type ReportRequest = {
+  /** Increases with every document the editor applies; answers carry it back so stale ones can be told apart. */
+  revision: number;
+  doc: FrameDocument;
+  /** A frame was opened: forget the last report (its part marks belong to another frame). */
+  reset: boolean;
+  /** Also say which parts the change kept, re-cut or added (a re-lay's summary). */
+  summarise: boolean;
+};
+
+export type ReportReply =
+  | { type: 'report'; revision: number; report: FrameReport; scene: Scene; ms: number; changes: WhatChanged | null }
+  | { type: 'error'; revision: number; message: string; field: string | null };
+
+/** One engine per frame editor: part marks carry over from each report to the next, as the parts stay the same. */
+export function createReportEngine(now: () => number = () => performance.now()): (req: ReportRequest) => ReportReply {
+  let last: FrameReport | null = null;
+  return (req) => {
+    if (req.reset) last = null;
+    const t0 = now();
+    try {
+      const report = computeReport(req.doc, last ? { previous: last } : {});
+      const scene = sceneFromReport(req.doc, report);
+      const changes = req.summarise && last ? diffReports(last, report) : null;
+      last = report;
+      return { type: 'report', revision: req.revision, report, scene, ms: now() - t0, changes };
+    } catch (e) {
+      return { type: 'error', revision: req.revision, message: e instanceof Error ? e.message : String(e), field: e instanceof InputError ? e.field : null };
+    }
+  };
+}
