@@ -8,7 +8,7 @@ import type { Config } from './config';
 import { createSessionPool, type Orm } from './db';
 import { NotFoundError } from './errors';
 import { csrfProtection } from './http/csrf';
-import { errorHandler, type ErrorLogger } from './http/error-handler';
+import { errorHandler, loggableError, type ErrorLogger } from './http/error-handler';
 import { createSessionStore, sessionMiddleware } from './http/session';
 import { authRouter } from './modules/auth/auth.routes';
 import { framesRouter } from './modules/frames/frames.routes';
@@ -22,6 +22,7 @@ import { outboxRouter } from './modules/outbox/outbox.routes';
 import { stockRouter } from './modules/stock/stock.routes';
 import { suppliersRouter } from './modules/suppliers/suppliers.routes';
 import { plannerRouter } from './modules/planner/planner.routes';
+import { WorkerPool } from './workers/pool';
 
 export interface Services {
   orm: Orm;
@@ -30,12 +31,14 @@ export interface Services {
   sessionStore?: session.Store;
   /** Where unexpected errors are reported; defaults to stderr. */
   logError?: ErrorLogger;
+  /** Worker threads for plans and documents; when omitted the app starts its own (closed by disposeApp). */
+  workers?: WorkerPool;
 }
 
 const ownedStores = new WeakMap<Express, { close(): Promise<void> }>();
 
 const defaultLogger: ErrorLogger = (message, err) => {
-  console.error(message, err);
+  console.error(`${message}: ${loggableError(err)}`);
 };
 
 function clientFiles(dir: string): RequestHandler[] {
@@ -56,18 +59,24 @@ export function createApp(services: Services): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
 
+  const owned: (() => Promise<void>)[] = [];
   let store = services.sessionStore;
   if (!store) {
     const pool = createSessionPool(config);
     const own = createSessionStore(pool);
-    ownedStores.set(app, {
-      close: async () => {
-        (own as session.Store & { close?: () => void }).close?.();
-        await pool.end();
-      },
+    owned.push(async () => {
+      (own as session.Store & { close?: () => void }).close?.();
+      await pool.end();
     });
     store = own;
   }
+  let workers = services.workers;
+  if (!workers) {
+    const own = new WorkerPool();
+    owned.push(() => own.close());
+    workers = own;
+  }
+  ownedStores.set(app, { close: async () => void (await Promise.all(owned.map((c) => c()))) });
 
   // Upgrading sub-requests to https only makes sense when the site is served over https.
   app.use(
@@ -91,11 +100,11 @@ export function createApp(services: Services): Express {
   api.use(framesRouter(orm));
   api.use(suppliersRouter(orm));
   api.use(ordersRouter(orm, config));
-  api.use(cuttingRouter(orm));
+  api.use(cuttingRouter(orm, workers));
   api.use(stockRouter(orm));
   api.use(attachmentsRouter(orm));
   api.use(outboxRouter(orm, config));
-  api.use(plannerRouter());
+  api.use(plannerRouter(workers));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { axisSchema } from './axis';
+import { LIMITS, lengthMm } from '../limits';
 import { idSchema, nameSchema } from './ids';
 import { positionSchema } from './position';
 
@@ -12,8 +13,8 @@ export const baySchema = z
     id: idSchema,
     name: nameSchema.optional(),
     module: idSchema.optional(),
-    width_mm: z.number().positive('must be more than 0').optional(),
-    clearance_mm: z.number().nonnegative('must not be negative').optional(),
+    width_mm: lengthMm().positive('must be more than 0').optional(),
+    clearance_mm: lengthMm().nonnegative('must not be negative').optional(),
   })
   .superRefine((b, ctx) => {
     if (b.module === undefined && b.width_mm === undefined) {
@@ -35,9 +36,9 @@ export const runSchema = z.strictObject({
   name: nameSchema.optional(),
   axis: axisSchema.default('x'),
   start: positionSchema.prefault({}),
-  upright_mm: z.number().nonnegative('must not be negative'),
-  clearance_mm: z.number().nonnegative('must not be negative').default(0),
-  bays: z.array(baySchema).min(1, 'a run needs at least one bay'),
+  upright_mm: lengthMm().nonnegative('must not be negative'),
+  clearance_mm: lengthMm().nonnegative('must not be negative').default(0),
+  bays: z.array(baySchema).min(1, 'a run needs at least one bay').max(LIMITS.baysPerRun, `at most ${LIMITS.baysPerRun} bays`),
 });
 export type Run = z.output<typeof runSchema>;
 export type RunInput = z.input<typeof runSchema>;
