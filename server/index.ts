@@ -3,6 +3,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createOrm, createSessionPool } from './db';
 import { createSessionStore } from './http/session';
+import { WorkerPool } from './workers/pool';
 
 // Listen, and on SIGINT/SIGTERM stop taking connections, let requests in flight finish, then close the
 // session store, its pool and the ORM, so no transaction is left half-done.
@@ -15,7 +16,8 @@ async function main(): Promise<void> {
   const orm = await createOrm(config);
   const pool = createSessionPool(config);
   const sessionStore = createSessionStore(pool);
-  const app = createApp({ orm, config, sessionStore });
+  const workers = new WorkerPool();
+  const app = createApp({ orm, config, sessionStore, workers });
 
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, (err?: Error) => (err ? reject(err) : resolve(s)));
@@ -35,6 +37,7 @@ async function main(): Promise<void> {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
     (sessionStore as typeof sessionStore & { close?: () => void }).close?.();
+    await workers.close();
     await pool.end();
     await orm.close(true);
     process.exit(0);

@@ -5,6 +5,7 @@ import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createOrm, createSessionPool, type Orm } from '../../server/db';
 import { createSessionStore } from '../../server/http/session';
+import { WorkerPool } from '../../server/workers/pool';
 
 // One running app over the test database, built the way server/index.ts builds it.
 
@@ -35,7 +36,8 @@ export async function createTestContext(overrides: Record<string, string> = {}):
   const pool: pg.Pool = createSessionPool(config);
   const store: session.Store = createSessionStore(pool, { pruneIntervalSeconds: false });
   const loggedErrors: unknown[] = [];
-  const app = createApp({ orm, config, sessionStore: store, logError: (_m, err) => loggedErrors.push(err) });
+  const workers = new WorkerPool();
+  const app = createApp({ orm, config, sessionStore: store, workers, logError: (_m, err) => loggedErrors.push(err) });
   let closed = false;
   return {
     app,
@@ -46,6 +48,7 @@ export async function createTestContext(overrides: Record<string, string> = {}):
       if (closed) return;
       closed = true;
       (store as session.Store & { close?: () => void }).close?.();
+      await workers.close();
       await pool.end();
       await orm.close(true);
     },

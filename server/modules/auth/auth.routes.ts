@@ -64,7 +64,7 @@ export function authRouter(orm: Orm, config: Config): Router {
 
   router.post('/auth/signin', signInLimiter, async (req, res) => {
     const input = parseInput(signInRequestSchema, req.body);
-    const user = await verifyCredentials(orm.em, input.email, input.password);
+    const user = await verifyCredentials(orm.em, input.email, input.password, config.bcryptCost);
     if (!user) throw new HttpError('invalid_credentials', 'Wrong e-mail or password');
     const csrfToken = await startSignedInSession(req, user.id);
     res.json({ user: toUserDto(user), csrfToken } satisfies AuthResponse);

@@ -2,26 +2,19 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { frameIdParamsSchema, paperSchema, startCuttingSchema, tickRequestSchema } from '@shared/api/shop';
 import { idSchema } from '@shared/api/common';
-import { cutListCsv, orderListCsv } from '@shared/shop/csv-export';
-import { drillSheet } from '@shared/shop/drill-list';
-import { shopCutList } from '@shared/shop/from-report';
-import { partLabels } from '@shared/shop/labels';
-import { orderList } from '@shared/shop/order-list';
-import { pickSheet } from '@shared/shop/pick-list';
-import { sawSheet } from '@shared/shop/saw-list';
 import type { Orm } from '../../db';
 import { ForbiddenError } from '../../errors';
 import { currentUserId } from '../../http/current-user';
-import { drillListPdf, labelsPdf, pickListPdf, sawListPdf } from '../../pdf';
 import { parseInput } from '../../validate';
+import { clientGone, type WorkerPool } from '../../workers/pool';
+import { needsPlan, SHOP_DOCS, type ShopDocumentOutput } from '../../workers/shop-document.task';
 import { authorizeFrame } from '../access/access.service';
-import { frameReport, planFrame, shopMeta, supplierFor } from '../orders/frame-shop.service';
+import { offersOf, shelfOf, supplierFor, today } from '../orders/frame-shop.service';
 import { sendFile } from '../orders/orders.routes';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
+import { Workshop } from '../workshops/workshop.entity';
 import { cuttingState, latestSession, startSession, tick, untick } from './cutting.service';
 import { can } from '@shared/api/roles';
-
-const DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv'] as const;
 
 const docQuerySchema = z.object({
   paper: paperSchema.default('A4'),
@@ -32,7 +25,7 @@ const docQuerySchema = z.object({
   minOffcut_mm: z.coerce.number().min(0).max(3000).optional(),
 });
 
-export function cuttingRouter(orm: Orm): Router {
+export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
   const router = Router();
 
   router.get('/frames/:frameId/cutting', async (req, res) => {
@@ -79,34 +72,37 @@ export function cuttingRouter(orm: Orm): Router {
   // this version, so paper and tablet show the same bars.
   router.get('/frames/:frameId/shop/:doc', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, { frameId: req.params.frameId }, 'params');
-    const doc = parseInput(z.object({ doc: z.enum(DOCS) }), { doc: req.params.doc }, 'params').doc;
+    const doc = parseInput(z.object({ doc: z.enum(SHOP_DOCS) }), { doc: req.params.doc }, 'params').doc;
     const q = parseInput(docQuerySchema, req.query, 'query');
     const { frame } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'read');
-    const report = frameReport(frame);
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
-    const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
-    const base = `${frame.name}-r${frame.version}`;
-    const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
+    const workshop = await orm.em.findOneOrFail(Workshop, { id: frame.project.workshop.id });
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
-    const needsPlan = (doc === 'saw-list.pdf' && !frozen) || doc === 'order-list.csv';
-    const supplier = needsPlan ? await supplierFor(orm.em, frame.project.workshop.id, q.supplierId) : null;
-    const planned = needsPlan ? await planFrame(orm.em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS }) : null;
-    const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
-    switch (doc) {
-      case 'saw-list.pdf':
-        return sendFile(res, await sawListPdf(sawSheet(cutList, frozen?.plans ?? planned!.plans, meta)), 'application/pdf', `${base}-saw-list.pdf`);
-      case 'drill-list.pdf':
-        return sendFile(res, await drillListPdf(drillSheet(cutList, meta.units), meta), 'application/pdf', `${base}-drill-list.pdf`);
-      case 'pick-list.pdf':
-        return sendFile(res, await pickListPdf(pickSheet(cutList), meta), 'application/pdf', `${base}-pick-list.pdf`);
-      case 'labels.pdf':
-        return sendFile(res, await labelsPdf(partLabels(cutList, meta), meta), 'application/pdf', `${base}-labels.pdf`);
-      case 'cut-list.csv':
-        return sendFile(res, cutListCsv(cutList, meta.units), 'text/csv; charset=utf-8', `${base}-cut-list.csv`);
-      case 'order-list.csv':
-        return sendFile(res, orderListCsv(orderList(planned!.planned, supplier?.currency ?? 'EUR', { cutFee: Number(supplier?.cutFee ?? 0) })), 'text/csv; charset=utf-8', `${base}-order-list.csv`);
-    }
+    const planning = needsPlan(doc, frozen !== null);
+    const supplier = planning ? await supplierFor(orm.em, frame.project.workshop.id, q.supplierId) : null;
+    const shelf = planning ? await shelfOf(orm.em, frame.project.workshop.id) : [];
+    // The report, the plan and the document itself are CPU work: a worker thread does them.
+    const out = await workers.run<ShopDocumentOutput>(
+      {
+        task: 'shopDocument',
+        input: {
+          doc,
+          document: frame.document,
+          meta: { project: frame.project.name, frame: frame.name, revision: frame.version, date: today(), workshop: workshop.name, units, paper: q.paper },
+          frozen,
+          offers: offersOf(supplier),
+          shelf,
+          settings: { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 },
+          timeLimitMs: PLAN_TIME_LIMIT_MS,
+          currency: supplier?.currency ?? 'EUR',
+          cutFee: Number(supplier?.cutFee ?? 0),
+        },
+      },
+      clientGone(res),
+    );
+    const body = typeof out.body === 'string' ? out.body : Buffer.from(out.body.buffer, out.body.byteOffset, out.body.byteLength);
+    return sendFile(res, body, out.contentType, `${frame.name}-r${frame.version}-${out.suffix}`);
   });
 
   return router;
