@@ -26,6 +26,19 @@ const base = `http://127.0.0.1:${port}`;
 const db = await prepareDatabase('slotwright_bench', { fresh: true, seed: true });
 const server = startServer({ ...db.env, NODE_ENV: 'production', SERVE_CLIENT: 'false', PORT: String(port), HOST: '127.0.0.1', SIGNIN_RATE_MAX: '1000' });
 
+// Whatever ends this script, the server it started ends with it.
+process.on('exit', () => server.kill('SIGTERM'));
+
+/** Waits until work left over from the previous scenario has drained (a shop document is served again). */
+async function settle(world: World): Promise<void> {
+  for (let i = 0; i < 120; i++) {
+    const r = await fetch(`${base}/api/frames/${world.frameId}/shop/cut-list.csv`, { headers: { cookie: world.caller.cookie } });
+    await r.arrayBuffer();
+    if (r.status === 200) return;
+    await new Promise((res) => setTimeout(res, 1000));
+  }
+}
+
 const q = (sorted: number[], f: number) => sorted[Math.min(sorted.length - 1, Math.floor(f * sorted.length))] ?? NaN;
 const ms = (v: number) => `${v.toFixed(v < 10 ? 1 : 0)} ms`;
 
@@ -49,9 +62,13 @@ try {
   const rows: string[][] = [['scenario', 'req', 'req/s', 'p50', 'p99', 'errors', 'non-2xx', 'health p50', 'health p99', 'worst stall', 'statuses']];
   for (const s of SCENARIOS) {
     if (opts.only.length > 0 && !opts.only.includes(s.name)) continue;
-    const probe = new Worker(new URL('./bench-api/probe.ts', import.meta.url), { workerData: { url: `${base}/api/health`, everyMs: 20 } });
+    await settle(world);
+    const probe = new Worker(new URL('./bench-api/probe.mjs', import.meta.url), { workerData: { url: `${base}/api/health`, everyMs: 20 } });
     const result = await s.run(world, { connections: opts.connections, durationS: opts.durationS });
-    const done = new Promise<{ latencies: number[]; failures: number }>((r) => probe.once('message', r));
+    const done = new Promise<{ latencies: number[]; failures: number }>((r, reject) => {
+      probe.once('message', r);
+      probe.once('error', reject);
+    });
     probe.postMessage('stop');
     const health = await done;
     await probe.terminate();

@@ -11,7 +11,8 @@ import { Order } from './modules/orders/order.entity';
 import { CustomProfile } from './modules/stock/custom-profile.entity';
 import { StockOffcut } from './modules/stock/stock-offcut.entity';
 import { Supplier } from './modules/suppliers/supplier.entity';
+import { SignInThrottle } from './modules/auth/sign-in-throttle.entity';
 
 /** Every entity the ORM knows, listed explicitly (no folder scanning). */
-export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment];
+export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment, SignInThrottle];
 export { Frame, FrameRevision, Membership, Project, User, Workshop };

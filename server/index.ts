@@ -10,6 +10,11 @@ import { WorkerPool } from './workers/pool';
 
 async function main(): Promise<void> {
   const config = loadConfig();
+  // A made-up secret would differ between servers on one database (a session valid on one only) and end every
+  // session on restart: only a development server may run without one.
+  if (config.sessionSecretGenerated && config.env !== 'development') {
+    throw new ConfigError(`Invalid environment:\n  SESSION_SECRET: required to serve when NODE_ENV=${config.env}`);
+  }
   if (config.sessionSecretGenerated) {
     console.warn('SESSION_SECRET is not set: using a random one, so sessions end when the server stops.');
   }

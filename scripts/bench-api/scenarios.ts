@@ -77,13 +77,15 @@ export const SCENARIOS: Scenario[] = [
           {
             method: 'PUT',
             headers: headers(w),
-            setupRequest: (req, context: Record<string, unknown>) => {
+            setupRequest: (req, ctx) => {
+              const context = ctx as { frame?: World['saveFrames'][number] };
               if (context.frame === undefined) context.frame = w.saveFrames[next++ % w.saveFrames.length];
-              const f = context.frame as World['saveFrames'][number];
+              const f = context.frame;
               return { ...req, path: `/api/frames/${f.id}/document`, body: JSON.stringify({ baseVersion: f.version, document: f.document }) };
             },
-            onResponse: (status, body, context: Record<string, unknown>) => {
-              if (status === 200) (context.frame as World['saveFrames'][number]).version = (JSON.parse(body) as { version: number }).version;
+            onResponse: (status, body, ctx) => {
+              const context = ctx as { frame?: World['saveFrames'][number] };
+              if (status === 200 && context.frame) context.frame.version = (JSON.parse(body) as { version: number }).version;
             },
           },
         ],

@@ -26,6 +26,7 @@ export function defaultPoolOptions(): WorkerPoolOptions {
 
 export class WorkerPool {
   private readonly piscina: Piscina;
+  private cancelled = 0;
 
   constructor(readonly options: WorkerPoolOptions = defaultPoolOptions()) {
     this.piscina = new Piscina({
@@ -48,14 +49,15 @@ export class WorkerPool {
       result = (await this.piscina.run(task, { signal })) as HeavyResult<T>;
     } catch (err) {
       if (err instanceof Error && /queue is at limit/i.test(err.message)) throw busy();
+      if (signal?.aborted) this.cancelled++;
       throw err;
     }
     if (!result.ok) throw new InputError(result.field, result.message);
     return result.value;
   }
 
-  get stats(): { queued: number; threads: number; utilization: number } {
-    return { queued: this.piscina.queueSize, threads: this.piscina.threads.length, utilization: this.piscina.utilization };
+  get stats(): { queued: number; threadIds: number[]; cancelled: number } {
+    return { queued: this.piscina.queueSize, threadIds: this.piscina.threads.map((t) => t.threadId), cancelled: this.cancelled };
   }
 
   close(): Promise<void> {

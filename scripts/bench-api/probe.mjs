@@ -1,9 +1,12 @@
+// Plain JavaScript: a worker thread does not inherit the TypeScript loader.
 // A health probe in its own thread (its own event loop), so what it measures is the server's stall, not the
 // benchmark's: GET /api/health every `everyMs`, one at a time, until told to stop; then the latencies.
 import { parentPort, workerData } from 'node:worker_threads';
 
-const { url, everyMs } = workerData as { url: string; everyMs: number };
-const latencies: number[] = [];
+/** @type {{ url: string, everyMs: number }} */
+const { url, everyMs } = workerData;
+/** @type {number[]} */
+const latencies = [];
 let failures = 0;
 let running = true;
 parentPort?.on('message', (m) => {
