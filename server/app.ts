@@ -12,7 +12,7 @@ import { errorHandler, loggableError, type ErrorLogger } from './http/error-hand
 import { createSessionStore, sessionMiddleware } from './http/session';
 import { authRouter } from './modules/auth/auth.routes';
 import { framesRouter } from './modules/frames/frames.routes';
-import { healthRouter } from './modules/health/health.routes';
+import { createHealthPool, healthRouter } from './modules/health/health.routes';
 import { projectsRouter } from './modules/projects/projects.routes';
 import { workshopsRouter } from './modules/workshops/workshops.routes';
 import { attachmentsRouter } from './modules/attachments/attachments.routes';
@@ -86,7 +86,9 @@ export function createApp(services: Services): Express {
   );
 
   // Before the session, so health checks and static files never touch the session table.
-  app.use('/api', healthRouter(orm));
+  const healthPool = createHealthPool(config.databaseUrl);
+  owned.push(() => healthPool.end());
+  app.use('/api', healthRouter(healthPool));
   if (config.serveClient) app.use(clientFiles(config.clientDir));
 
   const api = express.Router();

@@ -29,6 +29,8 @@ export function isDatabaseDown(err: unknown): boolean {
   if (err.name === 'ConnectionException') return true;
   const code = (err as { code?: unknown }).code;
   if (typeof code !== 'string') return /Connection terminated|timeout exceeded when trying to connect|Knex: Timeout acquiring a connection/i.test(err.message);
-  // 08xxx connection exceptions, 57P01-57P03 admin shutdown / crash shutdown / cannot connect now.
+  // 08xxx connection exceptions (but 08P01, a protocol violation such as a NUL in a parameter, is a bad
+  // request's fault), 57P01-57P03 admin shutdown / crash shutdown / cannot connect now.
+  if (code === '08P01') return false;
   return /^08|^57P0[123]$|^ECONNREFUSED$|^ECONNRESET$|^ETIMEDOUT$|^EPIPE$/.test(code);
 }

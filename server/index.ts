@@ -1,5 +1,5 @@
 import type { Server } from 'node:http';
-import { createApp } from './app';
+import { createApp, disposeApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createOrm, createSessionPool } from './db';
 import { createSessionStore } from './http/session';
@@ -43,6 +43,7 @@ async function main(): Promise<void> {
     clearTimeout(force);
     (sessionStore as typeof sessionStore & { close?: () => void }).close?.();
     await workers.close();
+    await disposeApp(app);
     await pool.end();
     await orm.close(true);
     process.exit(0);

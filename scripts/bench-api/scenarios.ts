@@ -85,6 +85,8 @@ export const SCENARIOS: Scenario[] = [
             },
             onResponse: (status, body, ctx) => {
               const context = ctx as { frame?: World['saveFrames'][number] };
+              // A 409 (a connection re-made after a timeout picks a frame another one saves) names the version now.
+              if (status === 409 && context.frame) context.frame.version = (JSON.parse(body) as { error: { current: { version: number } } }).error.current.version;
               if (status === 200 && context.frame) context.frame.version = (JSON.parse(body) as { version: number }).version;
             },
           },

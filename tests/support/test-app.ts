@@ -1,7 +1,7 @@
 import type { Express } from 'express';
 import type pg from 'pg';
 import type session from 'express-session';
-import { createApp } from '../../server/app';
+import { createApp, disposeApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createOrm, createSessionPool, type Orm } from '../../server/db';
 import { createSessionStore } from '../../server/http/session';
@@ -51,6 +51,7 @@ export async function createTestContext(overrides: Record<string, string> = {}, 
       closed = true;
       (store as session.Store & { close?: () => void }).close?.();
       await workers.close();
+      await disposeApp(app);
       await pool.end();
       await orm.close(true);
     },

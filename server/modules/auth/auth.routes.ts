@@ -12,11 +12,6 @@ import { createUser, findUser, membershipsOf, toUserDto, verifyCredentials } fro
 import { refuseCommonPassword } from './common-passwords';
 import { forget, recordFailure, refuseIfBlocked, type ThrottleRule } from './throttle';
 
-function emailKey(req: Request): string {
-  const email: unknown = (req.body as { email?: unknown } | undefined)?.email;
-  return typeof email === 'string' ? email.trim().toLowerCase() : '';
-}
-
 /** A fresh session id for the signed-in user (no fixation), with a fresh CSRF token. */
 async function startSignedInSession(req: Request, userId: string): Promise<string> {
   await regenerateSession(req);
@@ -62,11 +57,12 @@ export function authRouter(orm: Orm, config: Config): Router {
 
   router.post('/auth/signin', async (req, res) => {
     const em = orm.em;
-    const pair = `pair:${address(req)}|${emailKey(req)}`;
+    // Parsed first (cheap): the keys below hold only an e-mail the database can store.
+    const input = parseInput(signInRequestSchema, req.body);
+    const pair = `pair:${address(req)}|${input.email}`;
     const ip = `ip:${address(req)}`;
     policy(res, pairRule);
     await refuseIfBlocked(em, [pair, ip], 'Too many sign-in attempts; wait and try again');
-    const input = parseInput(signInRequestSchema, req.body);
     const user = await verifyCredentials(em, input.email, input.password, config.bcryptCost);
     if (!user) {
       await recordFailure(em, pair, pairRule);
