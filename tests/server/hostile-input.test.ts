@@ -190,4 +190,13 @@ describe('uploads and 404s', () => {
     expectClientError(theirs, 404);
     expect(theirs.body).toEqual(missing.body);
   });
+
+  it('a supplier of another workshop and one that does not exist give the same 404', async () => {
+    const created = await owner.post(`/api/workshops/${workshopId}/suppliers`, { name: 'Bars Ltd', email: 'bars@example.test' }).expect(201);
+    const stranger = await signedIn(ctx.app, await makeUser(ctx.orm));
+    const theirs = await stranger.patch(`/api/suppliers/${created.body.id}`, { notes: 'x' });
+    const missing = await stranger.patch('/api/suppliers/00000000-0000-4000-8000-000000000000', { notes: 'x' });
+    expectClientError(theirs, 404);
+    expect(theirs.body).toEqual(missing.body);
+  });
 });
