@@ -12,7 +12,8 @@ export interface BenchInstance {
   optimum: number;
 }
 
-export const benchDir = new URL('../../../shared/bench/bpp/', import.meta.url).pathname;
+/** `../shared/bench/bpp` beside the repository, or BPP_DIR where the checkout sits elsewhere. */
+export const benchDir = process.env.BPP_DIR ?? new URL('../../../shared/bench/bpp/', import.meta.url).pathname;
 
 export function benchAvailable(dir = benchDir): boolean {
   return existsSync(join(dir, 'optima.tsv'));

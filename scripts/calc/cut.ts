@@ -1,7 +1,8 @@
 // `calc cut JOB.json [--time-limit MS]`: plan the cutting of one profile's parts from stock bars.
 import { readFile } from 'node:fs/promises';
 import { InputError } from '../../shared/errors';
-import { planCutsSync } from '../../shared/planner/index';
+import highsLoader from 'highs';
+import { planCutsSync, useMipSolver, type MipSolver } from '../../shared/planner/index';
 
 export async function run(args: string[]): Promise<unknown> {
   let file: string | undefined;
@@ -21,6 +22,8 @@ export async function run(args: string[]): Promise<unknown> {
   } catch (err) {
     throw new InputError('JOB.json', `JOB.json: cannot read ${file}: ${err instanceof Error ? err.message : String(err)}`);
   }
+  // HiGHS for the exact model on small jobs with several bar lengths (the server and the browser load it too).
+  useMipSolver((await highsLoader()).solve as unknown as MipSolver);
   const plan = planCutsSync(job as Parameters<typeof planCutsSync>[0], { timeLimitMs });
   return {
     barCount: plan.barCount,

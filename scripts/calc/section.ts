@@ -1,4 +1,5 @@
 import { resolveProfile, sectionOf } from '@shared/catalog/profiles';
+import { principalAxes } from '@shared/geometry/polygon';
 
 export type SectionOutput = {
   profile: string;
@@ -10,6 +11,12 @@ export type SectionOutput = {
   mass_kg_per_m: number;
   E_MPa: number;
   alloy: string;
+  /** Product of inertia ∫xy dA about the centroid (zero for a section symmetric about x or y). */
+  Ixy_mm4: number;
+  /** Principal second moments, I1 ≥ I2, and the angle from the x axis to the major axis (degrees). */
+  I1_mm4: number;
+  I2_mm4: number;
+  angle_deg: number;
 };
 
 const USAGE = 'usage: calc section <profile>  (a catalogue id from `calc profiles`, or rect:WxH, tube:WxHxT, angle:AxBxT in mm)';
@@ -19,6 +26,7 @@ export async function run(args: string[]): Promise<SectionOutput> {
   if (args.length !== 1) throw new Error(`profile: give exactly one profile. ${USAGE}`);
   const profile = resolveProfile(args[0]);
   const s = sectionOf(profile);
+  const p = principalAxes(s.Ix_mm4, s.Iy_mm4, s.Ixy_mm4);
   return {
     profile: profile.id,
     area_mm2: s.area_mm2,
@@ -29,5 +37,9 @@ export async function run(args: string[]): Promise<SectionOutput> {
     mass_kg_per_m: s.mass_kg_per_m,
     E_MPa: s.E_MPa,
     alloy: s.alloy,
+    Ixy_mm4: s.Ixy_mm4,
+    I1_mm4: p.I1,
+    I2_mm4: p.I2,
+    angle_deg: (p.theta * 180) / Math.PI,
   };
 }

@@ -327,6 +327,35 @@ export function beam(input: BeamInput): BeamResult {
   };
 }
 
+/** The reactions alone (no search for the extremes): what a load path needs from each span. */
+export function beamReactions(input: BeamInput): [number, number] {
+  validate(input);
+  let r0 = 0;
+  let r1 = 0;
+  for (const l of input.loads) {
+    const p = influenceOf(l, input.support, input.span_mm).reactions;
+    r0 += p[0];
+    r1 += p[1];
+  }
+  return [r0, r1];
+}
+
+/**
+ * Upper bounds of the largest moment and deflection of a span, from its loads' magnitudes alone: no load anywhere
+ * on a simple span gives more than PL/4 and PL³/48EI (at midspan), none on a cantilever more than PL and PL³/3EI
+ * (at its tip) (AISC Manual Table 3-23, cases 7 and 22); superposition of the magnitudes bounds the sum.
+ */
+export function beamBound(input: BeamInput): { moment_Nmm: number; deflection_mm: number } {
+  let Q = 0;
+  for (const l of input.loads) Q += l.kind === 'point' ? Math.abs(l.P_N) : Math.abs(l.w_N_per_mm) * ((l.to_mm ?? input.span_mm) - (l.from_mm ?? 0));
+  const L = input.span_mm;
+  const cantilever = input.support === 'cantilever';
+  return {
+    moment_Nmm: cantilever ? Q * L : (Q * L) / 4,
+    deflection_mm: (Q * L ** 3) / ((cantilever ? 3 : 48) * input.E_MPa * input.I_mm4),
+  };
+}
+
 /** Deflection (positive downwards) at x, for plotting or checking a particular point. */
 export function beamDeflectionAt(input: BeamInput, x_mm: number): number {
   validate(input);

@@ -1,13 +1,21 @@
 import { crossAxes, type Axis } from '../model/axis';
-import { DEFAULT_SIDE_GAP_MM, type Bearing } from '../model/module';
+import { DEFAULT_SIDE_GAP_MM, moduleLabel, type Bearing } from '../model/module';
 import { ai, overlapOn, type Box } from './box';
 import { faceName, type FaceName } from './faces';
 import type { ModuleGeometry } from './resolve-modules';
 import type { MemberGeometry } from './resolve-members';
 import type { ReportWarning } from './warnings';
 
-/** A module resting on (or hanging from) a member face within this much is bearing on it (mm). */
-const BEAR_MM = 0.5;
+/**
+ * A module whose base (or top, when hung) is within this much of a member face bears on it (mm). Not a hair's
+ * breadth: a builder places a module by typing a round figure, dragging on a 5 mm grid or snapping to a face that
+ * later moves by a profile's tolerance, and a real unit stands on its feet or a rubber pad a few millimetres deep,
+ * so a gap of 1 or 2 mm is a module resting there. Further off than 3 mm it is meant to stand clear (a shelf over
+ * a tank), and the loads must not be put on a member that does not carry them. Common practice, no source.
+ */
+export const BEAR_TOLERANCE_MM = 3;
+/** A member only bears a module it reaches under (or beside) by more than this (mm): touching edges do not bear. */
+const OVERLAP_MM = 0.5;
 
 /** One member a module bears on: the face it bears on and the stretch of the member under it. */
 export type BearingContact = {
@@ -21,6 +29,24 @@ export type BearingContact = {
 export type ModuleBearing = { module: number; bearing: Bearing; contacts: BearingContact[] };
 
 const horizontal = (a: Axis) => a !== 'z';
+
+const NOTHING: Readonly<Record<Bearing, string>> = {
+  base: 'sits on no member',
+  hung: 'hangs from no member',
+  'side-rails': 'runs on no side rails',
+};
+const FIX: Readonly<Record<Bearing, string>> = {
+  base: 'snap its base onto the top of rails or bearers, or add bearers under it',
+  hung: 'snap its top to the underside of rails, or add rails over it to hang it from',
+  'side-rails': 'put it between two rails, one each side, or choose “sits on” if it stands on the rails below',
+};
+
+/** A member as the builder knows it: the name they gave it, else its kind of member. */
+function memberLabel(m: MemberGeometry): string {
+  const name = m.member.name?.trim();
+  if (name) return `“${name}”`;
+  return m.axis === 'z' ? 'an upright' : m.axis === 'x' ? 'a rail' : 'a cross-member';
+}
 
 function contactOn(mod: Box, m: MemberGeometry, box: Box, face: FaceName): BearingContact {
   const a = ai(m.axis);
@@ -69,8 +95,8 @@ export function findBearings(
         if (!horizontal(m.axis)) continue;
         const box = effective[m.index];
         const level = bearing === 'base' ? box.max[2] - mod.min[2] : mod.max[2] - box.min[2];
-        if (Math.abs(level) > BEAR_MM) continue;
-        if (overlapOn(mod, box, 0) <= BEAR_MM || overlapOn(mod, box, 1) <= BEAR_MM) continue;
+        if (Math.abs(level) > BEAR_TOLERANCE_MM) continue;
+        if (overlapOn(mod, box, 0) <= OVERLAP_MM || overlapOn(mod, box, 1) <= OVERLAP_MM) continue;
         found.push(contactOn(mod, m, box, bearing === 'base' ? 'top' : 'bottom'));
       }
     } else {
@@ -83,11 +109,11 @@ export function findBearings(
         for (const m of members) {
           if (!horizontal(m.axis) || m.axis === side) continue;
           const box = effective[m.index];
-          if (overlapOn(mod, box, 2) <= BEAR_MM || overlapOn(mod, box, ai(m.axis)) <= BEAR_MM) continue;
+          if (overlapOn(mod, box, 2) <= OVERLAP_MM || overlapOn(mod, box, ai(m.axis)) <= OVERLAP_MM) continue;
           const below = mod.min[k] - box.max[k];
           const above = box.min[k] - mod.max[k];
-          if (below >= -BEAR_MM && below <= gap && (!low || below < low.gap - 1e-9)) low = { m, gap: below };
-          if (above >= -BEAR_MM && above <= gap && (!high || above < high.gap - 1e-9)) high = { m, gap: above };
+          if (below >= -BEAR_TOLERANCE_MM && below <= gap && (!low || below < low.gap - 1e-9)) low = { m, gap: below };
+          if (above >= -BEAR_TOLERANCE_MM && above <= gap && (!high || above < high.gap - 1e-9)) high = { m, gap: above };
         }
         return [low, high].filter((c): c is { m: MemberGeometry; gap: number } => c !== null).map((c) => c.m);
       });
@@ -97,7 +123,7 @@ export function findBearings(
         warnings.push({
           code: 'module-unsupported',
           module_id: g.module.id,
-          message: `${g.module.id}: side rails found on one side only (${chosen[0].member.id}); check the other side is within ${gap} mm`,
+          message: `${moduleLabel(g.module)} has a side rail on one side only (${memberLabel(chosen[0])}): add a rail on the other side, or move it so both sides are within ${gap} mm of a rail`,
         });
       }
     }
@@ -105,7 +131,7 @@ export function findBearings(
       warnings.push({
         code: 'module-unsupported',
         module_id: g.module.id,
-        message: `${g.module.id}: bears on no member (${bearing}); its weight is not checked — place it on members or name them in bearsOn`,
+        message: `${moduleLabel(g.module)} ${NOTHING[bearing]}, so its weight is not checked: ${FIX[bearing]}`,
       });
     }
     found.sort((p, q) => p.member - q.member);

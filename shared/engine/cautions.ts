@@ -19,3 +19,16 @@ export const SAFETY_FACTOR_NOTE =
 
 export const DEFLECTION_NOTE =
   'Deflection under the shock-factored load is held to span / N (default 240: IBC Table 1604.3, total load on floors); cantilevers use twice their length.';
+
+export const FIXINGS_CAUTION =
+  "Fixing-point reactions are what the frame's feet pass to the floor under each load case, the horizontal force shared equally among them; wall fixings are not modelled. Where and how the frame may be fixed to a vehicle, and the crash loads the fixings must take, are for the vehicle maker's rules and a qualified person, not this screening.";
+
+/** Where the load model simplifies; each one errs toward reporting more load, never less. */
+export const LOAD_MODEL_NOTES: readonly string[] = [
+  'A module is a rigid body on its supports (lever rule along and across them); on three or more supports it shares its weight as on equally stiff supports, which real members are not.',
+  'A pulled support is given no load (its uplift is not relied on) and strips of contact carry the higher edge of their pressure: member loads may add up to a little more than the weight.',
+  'Every member carries its own weight; uprights carry their whole weight at the foot.',
+  'Uprights are checked as columns over their full length about their weakest axis; intermediate rails are not counted as bracing.',
+  'Horizontal load cases move each module\'s weight toward the side it is pushed; the horizontal forces themselves, racking of the frame and bending of members sideways are not checked: braces or panels must carry them.',
+  'Angles and other unsymmetric sections bend about their principal axes with nothing holding them sideways; a member screwed along a panel is stiffer than shown.',
+];

@@ -1,3 +1,4 @@
+import type { MachiningOp } from './machining';
 import type { FrameReport, ReportMember } from './report-types';
 
 /** Lengths closer than this are the same part (mm), as the cut list groups them (to 0.1 mm). */
@@ -14,6 +15,9 @@ export type PartChange = {
   mark_after: string | null;
   cut_length_before_mm: number | null;
   cut_length_after_mm: number | null;
+  /** Machining the part needs now and did not before, and machining it no longer needs (end taps, access holes). */
+  machining_added: string[];
+  machining_removed: string[];
 };
 
 /**
@@ -30,6 +34,8 @@ export type ReuseStep = {
   from_mark: string | null;
   from_cut_length_mm: number | null;
   offcut_mm: number | null;
+  /** Machining to do on the part before it goes in (what the old part lacks); an old hole that is not needed stays. */
+  machining: string[];
 };
 
 export type WhatChanged = {
@@ -51,10 +57,34 @@ export type WhatChanged = {
     new_parts: number;
     new_material_mm: number;
     spare_parts: number;
+    /** Parts that need new machining (an end tap, an access hole) whatever happens to their length. */
+    machining_parts: number;
+    end_taps_added: number;
+    access_holes_added: number;
   };
 };
 
-type Part = Pick<ReportMember, 'id' | 'mark' | 'profile' | 'cut_length_mm'>;
+type Part = Pick<ReportMember, 'id' | 'mark' | 'profile' | 'cut_length_mm'> & { ops?: readonly MachiningOp[] };
+
+/** A machining step in words, the same for the same work wherever its joint id came from. */
+export function describeOp(op: MachiningOp): string {
+  if (op.kind === 'end-tap') return `end tap ${op.thread} at the ${op.end} end`;
+  return `access hole Ø${op.diameter_mm} mm in the ${op.face} face at ${Math.round(op.at_mm * 10) / 10} mm`;
+}
+
+/** Ops of `now` not in `was`, by description (a multiset difference). Unknown old machining counts as none. */
+function missing(now: readonly MachiningOp[] | undefined, was: readonly MachiningOp[] | undefined): string[] {
+  const left = new Map<string, number>();
+  for (const op of was ?? []) left.set(describeOp(op), (left.get(describeOp(op)) ?? 0) + 1);
+  const out: string[] = [];
+  for (const op of now ?? []) {
+    const d = describeOp(op);
+    const n = left.get(d) ?? 0;
+    if (n > 0) left.set(d, n - 1);
+    else out.push(d);
+  }
+  return out;
+}
 
 const byId = (p: { member_id: string }, q: { member_id: string }) => (p.member_id < q.member_id ? -1 : p.member_id > q.member_id ? 1 : 0);
 
@@ -66,7 +96,7 @@ const byId = (p: { member_id: string }, q: { member_id: string }) => (p.member_i
  * best fit keeps the long old parts for the long new ones, so little new material is cut. Deterministic.
  */
 export function diffReports(
-  before: Pick<FrameReport, 'members'>,
+  before: { members: readonly Part[] } | Pick<FrameReport, 'members'>,
   after: Pick<FrameReport, 'members' | 'settings'>,
 ): WhatChanged {
   const kerf = after.settings.kerf_mm;
@@ -90,6 +120,8 @@ export function diffReports(
       mark_after: m.mark,
       cut_length_before_mm: o?.cut_length_mm ?? null,
       cut_length_after_mm: m.cut_length_mm,
+      machining_added: o ? missing(m.ops, o.ops) : missing(m.ops, []),
+      machining_removed: o ? missing(o.ops, m.ops) : [],
     });
   }
   for (const o of before.members) {
@@ -103,6 +135,8 @@ export function diffReports(
       mark_after: null,
       cut_length_before_mm: o.cut_length_mm,
       cut_length_after_mm: null,
+      machining_added: [],
+      machining_removed: [],
     });
   }
   parts.sort(byId);
@@ -126,6 +160,8 @@ export function diffReports(
     from_mark: from?.mark ?? null,
     from_cut_length_mm: from?.cut_length_mm ?? null,
     offcut_mm: action === 'recut' && from ? Math.round((from.cut_length_mm - m.cut_length_mm - kerf) * 10000) / 10000 : null,
+    // A re-cut part loses its cut-off end and whatever was machined there: only a kept or same-length part keeps its ops.
+    machining: action === 'keep' || action === 'reuse' ? missing(m.ops, from?.ops) : missing(m.ops, []),
   });
 
   for (const m of after.members) {
@@ -183,6 +219,9 @@ export function diffReports(
       new_parts: act('cut-new').length,
       new_material_mm: Math.round(act('cut-new').reduce((s, p) => s + p.cut_length_mm, 0) * 10000) / 10000,
       spare_parts: spare.length,
+      machining_parts: steps.filter((p) => p.machining.length > 0).length,
+      end_taps_added: steps.reduce((n, p) => n + p.machining.filter((d) => d.startsWith('end tap')).length, 0),
+      access_holes_added: steps.reduce((n, p) => n + p.machining.filter((d) => d.startsWith('access hole')).length, 0),
     },
   };
 }

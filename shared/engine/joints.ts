@@ -255,6 +255,7 @@ export function findJoints(
     if (j.buttingEnd === 'end') effective[b.index].max[ba] = t.drawn.min[ba];
     else effective[b.index].min[ba] = t.drawn.max[ba];
   }
+  refindStale(members, joints, effective, endJoint, e);
   for (const j of joints) {
     const a = effective[j.butting];
     const b = effective[j.other];
@@ -285,4 +286,59 @@ export function findJoints(
     }) as [EndInfo, EndInfo],
   );
   return { joints, effective, ends, warnings };
+}
+
+/** Does the end of member b (its effective box) lie against member t's effective box? */
+function endTouches(members: readonly MemberGeometry[], effective: readonly Box[], b: number, end: EndName, t: number): boolean {
+  const m = members[b];
+  const a = ai(m.axis);
+  const bb = effective[b];
+  const tb = effective[t];
+  const s = end === 'start' ? bb.min[a] : bb.max[a];
+  const [p, q] = crossAxes(m.axis);
+  if (overlapOn(bb, tb, ai(p)) <= TOUCH_MM || overlapOn(bb, tb, ai(q)) <= TOUCH_MM) return false;
+  return tb.min[a] <= s + TOUCH_MM && tb.max[a] >= s - TOUCH_MM;
+}
+
+/**
+ * Joints are found on the drawn members; once ends are cut back and carried across corners, a member set to run
+ * through can take the place another butting end met (a cross-member drawn against an upright now meets the rail
+ * running over the upright's cut-back end). Such a stale joint is re-found on the finished geometry: the end butts
+ * into what it now meets, or is left free when it meets nothing.
+ */
+function refindStale(members: readonly MemberGeometry[], joints: Joint[], effective: Box[], endJoint: (number | null)[][], e: (end: EndName) => number): void {
+  for (let k = 0; k < joints.length; k++) {
+    const j = joints[k];
+    if (j.kind === 'inline' || j.through === null || j.through !== j.other) continue;
+    if (endTouches(members, effective, j.butting, j.buttingEnd, j.through)) continue;
+    const b = members[j.butting];
+    const a = ai(b.axis);
+    if (j.otherEnd !== null && endJoint[j.other][e(j.otherEnd)] === k) endJoint[j.other][e(j.otherEnd)] = null;
+    // The end as drawn, before it was cut back to the face it no longer meets.
+    if (j.buttingEnd === 'end') effective[j.butting].max[a] = b.drawn.max[a];
+    else effective[j.butting].min[a] = b.drawn.min[a];
+    let best: number | null = null;
+    let bestArea = 0;
+    for (let t = 0; t < members.length; t++) {
+      if (t === j.butting || members[t].axis === b.axis || !endTouches(members, effective, j.butting, j.buttingEnd, t)) continue;
+      const [p, q] = crossAxes(b.axis);
+      const area = overlapOn(effective[j.butting], effective[t], ai(p)) * overlapOn(effective[j.butting], effective[t], ai(q));
+      if (area > bestArea + 1e-9) {
+        best = t;
+        bestArea = area;
+      }
+    }
+    if (best === null) {
+      endJoint[j.butting][e(j.buttingEnd)] = null;
+      joints.splice(k, 1);
+      for (const list of endJoint) for (let i = 0; i < 2; i++) if (list[i] !== null && (list[i] as number) > k) list[i] = (list[i] as number) - 1;
+      k--;
+      continue;
+    }
+    const t = members[best];
+    const id = t.member.id < b.member.id ? `${t.member.id}|${b.member.id}` : `${b.member.id}|${t.member.id}`;
+    joints[k] = { ...j, id, kind: 'butt', other: best, otherEnd: null, through: best };
+    if (j.buttingEnd === 'end') effective[j.butting].max[a] = effective[best].min[a];
+    else effective[j.butting].min[a] = effective[best].max[a];
+  }
 }

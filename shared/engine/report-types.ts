@@ -39,6 +39,15 @@ export type ReportSettings = {
   shock_factor: number;
   deflection_limit_n: number;
   safety_factor: number;
+  /** False for a frame that never moves: only its weight (times the shock factor) is checked. */
+  in_vehicle: boolean;
+  forward_g: number;
+  rearward_g: number;
+  sideways_g: number;
+  /** The vehicle's forward direction on the frame's axes, or `unknown` (braking checked toward every side). */
+  forward: 'unknown' | '+x' | '-x' | '+y' | '-y';
+  /** The upright effective length factor the user set, or null (chosen from the frame). */
+  column_k: number | null;
   spares_pct: number;
   t_nut: 'slide-in' | 'drop-in';
 };
@@ -49,6 +58,8 @@ export type ReportBay = {
   /** Position in the run, from its start. */
   index: number;
   module_id: string | null;
+  /** Modules stacked above `module_id`, bottom to top. */
+  stack_ids: string[];
   start_mm: number;
   end_mm: number;
   width_mm: number;
@@ -161,6 +172,53 @@ export type ReportMemberCheck = {
   spans: ReportSpan[];
   utilisation: number | null;
   governing: 'deflection' | 'stress' | null;
+  /** The load case that governs this member (its largest utilisation): an id from `loads.cases`. */
+  governing_case: string;
+  /** The member's own weight (unfactored), included in its loads as a distributed load. */
+  self_weight_N: number;
+  /** An unsymmetric section (an angle) bending about its principal axes, free to deflect sideways. */
+  unsymmetric: { deflection_factor: number; stress_factor: number } | null;
+};
+
+export type ReportLoadCase = { id: string; name: string; vertical_factor: number; ax_g: number; ay_g: number; source: string };
+
+/** One module in one load case: its load, the plan point it acts through, and the reaction on each member. */
+export type ReportModuleStatics = {
+  module_id: string;
+  case: string;
+  load_N: number;
+  at_mm: { x: number; y: number };
+  reactions: { member_id: string; R_N: number; x_mm: number }[];
+  /** Null when every support pushes; otherwise the side it tips off to. */
+  tips_toward: FaceName | null;
+};
+
+export type ReportColumn = {
+  member_id: string;
+  mark: string;
+  axial_N: number;
+  governing_case: string;
+  length_mm: number;
+  K: number;
+  K_reason: string;
+  I_mm4: number;
+  area_mm2: number;
+  fo_MPa: number;
+  buckling_class: 'A' | 'B';
+  slenderness: number;
+  relative_slenderness: number;
+  euler_N: number;
+  chi: number;
+  capacity_N: number;
+  utilisation: number;
+  source: string;
+};
+
+export type ReportFixings = {
+  case: string;
+  horizontal_N: number;
+  vertical_N: number;
+  points: { member_id: string; at_mm: Vec3; vertical_N: number; horizontal_N: number }[];
 };
 
 export type ReportLoads = {
@@ -176,6 +234,16 @@ export type ReportLoads = {
   uprights: { member_id: string; axial_N: number }[];
   max_utilisation: number | null;
   governing_member_id: string | null;
+  /** Whether the worst utilisation is a beam check or an upright as a column. */
+  governing_check: 'beam' | 'column' | null;
+  cases: ReportLoadCase[];
+  statics: ReportModuleStatics[];
+  columns: ReportColumn[];
+  column_K: { value: number; reason: string };
+  fixings: ReportFixings[];
+  fixings_caution: string;
+  /** Where the load model simplifies, and which way that errs. */
+  model_notes: string[];
 };
 
 export type ReportMass = {

@@ -5,8 +5,11 @@ import type { FrameDocument } from '../model/frame-document';
 import { roleOf } from '../model/member';
 import { checkReferences } from '../model/references';
 import { findBearings } from './bearing';
+import { findClashes } from './clashes';
 import { ai, type Box } from './box';
-import { CAUTIONS, DEFLECTION_NOTE, SAFETY_FACTOR_NOTE, SHOCK_FACTOR_NOTE } from './cautions';
+import { CAUTIONS, DEFLECTION_NOTE, FIXINGS_CAUTION, LOAD_MODEL_NOTES, SAFETY_FACTOR_NOTE, SHOCK_FACTOR_NOTE } from './cautions';
+import { COLUMN_SOURCE } from './column';
+import { frameWarnings } from './frame-warnings';
 import { cutList } from './cut-list';
 import { hardwareList } from './hardware';
 import { methodTable } from './join-methods';
@@ -81,7 +84,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
 
   const { bearings, warnings: bearingWarnings } = findBearings(modules, members, eff);
   const hardware = hardwareList(doc, members, joints, methods, modules, bearings);
-  const loads = checkLoads(doc, members, modules, bearings, joints);
+  const loads = checkLoads(doc, members, modules, bearings, joints, (id) => methods.get(id)?.name ?? id);
   const mass = massAndCentre(members, lengths, eff, modules, hardware);
 
   const { display, frac } = doc.units;
@@ -155,17 +158,59 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       limit_mm: round(s.limit_mm, 4),
       moment_Nmm: round(s.moment_Nmm, 1),
       moment_fixed_Nmm: s.moment_fixed_Nmm === null ? null : round(s.moment_fixed_Nmm, 1),
+      root: s.root,
       stress_MPa: round(s.stress_MPa, 4),
       allowable_MPa: round(s.allowable_MPa, 4),
       utilisation: round(s.utilisation, 5),
     })),
     utilisation: c.utilisation === null ? null : round(c.utilisation, 5),
     governing: c.governing,
+    governing_case: c.case,
+    self_weight_N: round(c.self_weight_N, 3),
+    unsymmetric: c.unsymmetric ? { deflection_factor: round(c.unsymmetric.deflection_factor, 5), stress_factor: round(c.unsymmetric.stress_factor, 5) } : null,
   }));
-  let governing: (typeof checks)[number] | null = null;
-  for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > (governing.utilisation as number))) governing = c;
+  const columns = loads.columns.map((c) => ({
+    member_id: idOf(c.member),
+    mark: cuts.markOf[c.member],
+    axial_N: round(c.axial_N, 3),
+    governing_case: c.case,
+    length_mm: mm(c.length_mm),
+    K: c.K,
+    K_reason: c.K_reason,
+    I_mm4: round(c.I_mm4, 1),
+    area_mm2: round(c.area_mm2, 2),
+    fo_MPa: c.fo_MPa,
+    buckling_class: c.buckling_class,
+    slenderness: round(c.slenderness, 3),
+    relative_slenderness: round(c.relative_slenderness, 5),
+    euler_N: round(c.euler_N, 3),
+    chi: round(c.chi, 5),
+    capacity_N: round(c.capacity_N, 3),
+    utilisation: round(c.utilisation, 5),
+    source: COLUMN_SOURCE,
+  }));
+  let governing: { member_id: string; utilisation: number; check: 'beam' | 'column' } | null = null;
+  for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > governing.utilisation)) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'beam' };
+  for (const c of columns) if (governing === null || c.utilisation > governing.utilisation) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'column' };
 
-  const warnings = [...joints.warnings, ...bearingWarnings, ...hardware.warnings, ...loads.warnings];
+  const warnings = [...joints.warnings, ...frameWarnings(members, joints), ...bearingWarnings, ...findClashes(modules, members, eff), ...hardware.warnings, ...loads.warnings];
+  for (const c of columns) {
+    if (c.utilisation > 1) {
+      warnings.push({
+        code: 'column-over-utilised',
+        member_id: c.member_id,
+        message: `${c.member_id} (part ${c.mark}) carries ${Math.round(c.axial_N)} N as a column, ${Math.round(c.utilisation * 100)} % of its buckling resistance (${Math.round(c.capacity_N)} N at K = ${c.K}): use a stiffer profile, brace the frame or shorten the upright`,
+      });
+    }
+  }
+  const unsymmetric = new Set(checks.filter((c) => c.unsymmetric !== null).map((c) => c.member_id));
+  if (unsymmetric.size > 0) {
+    warnings.push({
+      code: 'unsymmetric-section',
+      member_id: [...unsymmetric][0],
+      message: `${[...unsymmetric].join(', ')}: unsymmetric sections (angles) bend about their principal axes; they are checked with nothing holding them sideways (lateral restraint not assumed), which over-reports a member screwed along a panel`,
+    });
+  }
   for (const c of checks) {
     if (c.utilisation !== null && c.utilisation > 1) {
       warnings.push({
@@ -204,6 +249,12 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       shock_factor: s.shockFactor,
       deflection_limit_n: s.deflectionLimitN,
       safety_factor: s.safetyFactor,
+      in_vehicle: s.inVehicle,
+      forward_g: s.forward_g,
+      rearward_g: s.rearward_g,
+      sideways_g: s.sideways_g,
+      forward: s.forward,
+      column_k: s.columnK ?? null,
       spares_pct: s.sparesPct,
       t_nut: s.tNut,
     },
@@ -215,6 +266,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       run_id: b.run.id,
       index: b.index,
       module_id: b.bay.module ?? null,
+      stack_ids: b.bay.stack ?? [],
       start_mm: mm(b.start_mm),
       end_mm: mm(b.end_mm),
       width_mm: mm(b.width_mm),
@@ -280,6 +332,26 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
         .map((g) => ({ member_id: g.member.id, axial_N: round(loads.axial_N[g.index], 3) })),
       max_utilisation: governing?.utilisation ?? null,
       governing_member_id: governing?.member_id ?? null,
+      governing_check: governing?.check ?? null,
+      cases: loads.cases.map((c) => ({ id: c.id, name: c.name, vertical_factor: c.vertical, ax_g: c.ax, ay_g: c.ay, source: c.source })),
+      statics: loads.statics.map((st) => ({
+        module_id: modules[st.module].module.id,
+        case: st.case,
+        load_N: round(st.load_N, 3),
+        at_mm: { x: round(st.at.x, 2), y: round(st.at.y, 2) },
+        reactions: st.reactions.map((r) => ({ member_id: idOf(r.member), R_N: round(r.R_N, 3), x_mm: round(r.x_mm, 2) })),
+        tips_toward: st.tips?.toward ?? null,
+      })),
+      columns,
+      column_K: loads.K,
+      fixings: loads.fixings.map((f) => ({
+        case: f.case,
+        horizontal_N: round(f.horizontal_N, 3),
+        vertical_N: round(f.vertical_N, 3),
+        points: f.points.map((p) => ({ member_id: idOf(p.member), at_mm: vec(p.at, 2), vertical_N: round(p.vertical_N, 3), horizontal_N: round(p.horizontal_N, 3) })),
+      })),
+      fixings_caution: FIXINGS_CAUTION,
+      model_notes: [...LOAD_MODEL_NOTES],
     },
     mass: {
       frame_kg: round(mass.frame_kg, 5),

@@ -2,7 +2,7 @@ import { InputError } from '../errors';
 import type { Axis } from '../model/axis';
 import type { FrameDocument } from '../model/frame-document';
 import type { Module } from '../model/module';
-import type { Bay, Run } from '../model/run';
+import { bayModuleIds, type Bay, type Run } from '../model/run';
 
 /** A datum as the resolver sees it: another datum (or the origin) plus a constant, and where it was defined. */
 type Node = { id: string; axis: Axis; base: string | undefined; offset: number; field: string };
@@ -28,8 +28,10 @@ export type ResolvedDatums = {
 function bayWidth(run: Run, bay: Bay, modules: Map<string, Module>): { width: number; clearance: number } {
   const clearance = bay.clearance_mm ?? run.clearance_mm;
   if (bay.width_mm !== undefined) return { width: bay.width_mm, clearance };
-  const m = modules.get(bay.module as string) as Module;
-  return { width: moduleSizeAlong(m, run.axis) + 2 * clearance, clearance };
+  // A stack is as wide as its widest module.
+  let widest = 0;
+  for (const id of bayModuleIds(bay)) widest = Math.max(widest, moduleSizeAlong(modules.get(id) as Module, run.axis));
+  return { width: widest + 2 * clearance, clearance };
 }
 
 /**
@@ -104,7 +106,7 @@ export function resolveDatums(doc: Pick<FrameDocument, 'datums' | 'runs' | 'modu
       const w = widths.get(bay.id) as { width: number; clearance: number };
       const layout: BayLayout = { run, bay, index, start_mm: start, end_mm: start + w.width, width_mm: w.width, clearance_mm: w.clearance };
       bays.set(bay.id, layout);
-      if (bay.module !== undefined) bayOfModule.set(bay.module, layout);
+      for (const id of bayModuleIds(bay)) bayOfModule.set(id, layout);
     });
   }
   return { values, axes, bays, bayOfModule };

@@ -188,3 +188,21 @@ export function rectRing(x0: number, y0: number, w: number, h: number): Pt[] {
     { x: x0, y: y0 + h },
   ];
 }
+
+export type PrincipalAxes = {
+  /** Major and minor principal second moments, I1 ≥ I2. */
+  I1: number;
+  I2: number;
+  /** Angle from the x axis to the major principal axis, radians, in (−π/2, π/2]. */
+  theta: number;
+};
+
+/**
+ * Principal second moments and axes from Ix, Iy and the product Ixy = ∫xy dA (Mohr's circle; Roark, Table A.1):
+ * I1,2 = (Ix + Iy)/2 ± √(((Ix − Iy)/2)² + Ixy²), the major axis at θ with tan 2θ = −2Ixy / (Ix − Iy).
+ */
+export function principalAxes(Ix: number, Iy: number, Ixy: number): PrincipalAxes {
+  const mean = (Ix + Iy) / 2;
+  const rad = Math.hypot((Ix - Iy) / 2, Ixy);
+  return { I1: mean + rad, I2: mean - rad, theta: 0.5 * Math.atan2(-2 * Ixy, Ix - Iy) + 0 };
+}

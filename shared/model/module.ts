@@ -38,6 +38,22 @@ const sizeSchema = z.strictObject({
   h_mm: lengthMm().positive('must be more than 0'),
 });
 
+/** Most alternatives one module may carry (a bound on input). */
+export const MAX_OPTIONS = 12;
+
+/**
+ * An alternative for a module ("pressed-steel sink, 5 kg" against "fireclay sink, 25 kg"): what it would change.
+ * Fields left out stay as the module has them.
+ */
+export const moduleOptionSchema = z.strictObject({
+  name: nameSchema.min(1, 'must not be empty'),
+  mass_kg: z.number().nonnegative('must not be negative').max(5000, 'must be at most 5000 kg'),
+  contents_kg: z.number().nonnegative('must not be negative').max(5000, 'must be at most 5000 kg').optional(),
+  litres: z.number().nonnegative('must not be negative').max(5000, 'must be at most 5000 L').optional(),
+  size: sizeSchema.optional(),
+});
+export type ModuleOption = z.output<typeof moduleOptionSchema>;
+
 /**
  * Something the frame holds, as a box: w along x, d along y, h along z. `mass_kg` is the module as installed;
  * `contents_kg` what it holds (food, tools); a tank's `litres` count as water when full. A module in a run's bay
@@ -64,6 +80,7 @@ export const moduleSchema = z
       })
       .optional(),
     sideGap_mm: lengthMm().nonnegative('must not be negative').optional(),
+    options: z.array(moduleOptionSchema).max(MAX_OPTIONS, `at most ${MAX_OPTIONS} options`).optional(),
   })
   .superRefine((m, ctx) => {
     if (m.litres !== undefined && m.kind !== 'tank') {
@@ -72,6 +89,31 @@ export const moduleSchema = z
   });
 export type Module = z.output<typeof moduleSchema>;
 export type ModuleInput = z.input<typeof moduleSchema>;
+
+const KIND_WORDS: Readonly<Record<ModuleKind, string>> = {
+  appliance: 'appliance',
+  sink: 'sink',
+  'drawer-stack': 'drawer stack',
+  tank: 'tank',
+  shelf: 'shelf',
+  other: 'module',
+};
+
+/**
+ * How a module is named to the builder: the name they gave it, else its kind in words. Messages use this, never
+ * the record id, which the builder never typed.
+ */
+export function moduleLabel(m: Pick<Module, 'name' | 'kind'>): string {
+  const name = m.name?.trim();
+  return name ? `“${name}”` : `the ${KIND_WORDS[m.kind]}`;
+}
+
+/** The three ways a module bears, in the words the editor offers them. */
+export const BEARING_WORDS: Readonly<Record<Bearing, string>> = {
+  base: 'sits on',
+  hung: 'hangs from',
+  'side-rails': 'runs on side rails',
+};
 
 /** Installed mass including contents; a tank counts full (water at 1 kg/L). */
 export function moduleMass_kg(m: Pick<Module, 'mass_kg' | 'contents_kg' | 'litres'>): number {

@@ -95,11 +95,15 @@ export function checkReferences(doc: FrameDocument): void {
     if (r.start.member !== undefined) fail(['runs', i, 'start', 'member'], 'a run starts from a datum, not a member face');
     datum(r.start.datum, r.axis, ['runs', i, 'start', 'datum']);
     r.bays.forEach((b, j) => {
-      if (b.module === undefined) return;
-      if (!moduleIds.has(b.module)) fail(['runs', i, 'bays', j, 'module'], `no module "${b.module}"`);
-      const other = bayOf.get(b.module);
-      if (other) fail(['runs', i, 'bays', j, 'module'], `module "${b.module}" is already in bay "${other}"`);
-      bayOf.set(b.module, b.id);
+      const held: [string, PropertyKey[]][] = [];
+      if (b.module !== undefined) held.push([b.module, ['runs', i, 'bays', j, 'module']]);
+      b.stack?.forEach((id, k) => held.push([id, ['runs', i, 'bays', j, 'stack', k]]));
+      for (const [id, path] of held) {
+        if (!moduleIds.has(id)) fail(path, `no module "${id}"`);
+        const other = bayOf.get(id);
+        if (other) fail(path, `module "${id}" is already in bay "${other}"`);
+        bayOf.set(id, b.id);
+      }
     });
   });
 

@@ -19,6 +19,11 @@ export type ToleranceClass = z.infer<typeof toleranceClassSchema>;
  * - safety factor 1.65 on the alloy's design-minimum yield: the Aluminum Design Manual's allowable-stress factor
  *   for yielding in building-type structures (recalled from memory, not confirmed against the manual).
  * - spares 10 %: small hardware gets lost or a nut is forgotten in a closed slot; common practice, no source.
+ * - forward / rearward / sideways 0.9 / 0.5 / 0.7 g: load securing for vans up to 2.0 t (VDI 2700 Sheet 16 /
+ *   ISO 27956), the largest of the published sets (EN 12195-1 gives 0.8 / 0.5 / 0.5 g over 3.5 t); forward
+ *   direction unknown until set, so braking is checked toward every side (REFERENCES.md).
+ * - in a vehicle: braking and cornering are checked; a bench or shelf that never moves sets it false.
+ * - column K unset: chosen from the frame (2 for a frame that can sway, 1 where braces stop it).
  * - T-nuts slide-in: cheaper and stronger than drop-in ones; the report warns where one must go in early.
  */
 export const settingsSchema = z.strictObject({
@@ -28,6 +33,12 @@ export const settingsSchema = z.strictObject({
   shockFactor: z.number().min(1, 'must be at least 1 (the static load)').max(20, 'must be at most 20').default(2.5),
   deflectionLimitN: z.number().min(10, 'must be at least 10').max(5000, 'must be at most 5000').default(240),
   safetyFactor: z.number().min(1, 'must be at least 1').max(10, 'must be at most 10').default(1.65),
+  inVehicle: z.boolean().default(true),
+  forward_g: z.number().min(0, 'must not be negative').max(3, 'must be at most 3 g').default(0.9),
+  rearward_g: z.number().min(0, 'must not be negative').max(3, 'must be at most 3 g').default(0.5),
+  sideways_g: z.number().min(0, 'must not be negative').max(3, 'must be at most 3 g').default(0.7),
+  forward: z.enum(['unknown', '+x', '-x', '+y', '-y']).default('unknown'),
+  columnK: z.number().min(0.5, 'must be at least 0.5').max(5, 'must be at most 5').optional(),
   sparesPct: z.number().min(0, 'must not be negative').max(100, 'must be at most 100').default(10),
   alloy: z.enum(ALLOY_IDS as [AlloyId, ...AlloyId[]]).optional(),
   tNut: z.enum(['slide-in', 'drop-in']).default('slide-in'),

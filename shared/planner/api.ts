@@ -5,7 +5,7 @@ import { cutJobSchema } from './job';
 /** Longest improvement stage the server grants one request (ms). */
 export const MAX_SERVER_TIME_LIMIT_MS = 5000;
 
-export const planCutRequestSchema = z.object({
+export const planCutRequestSchema = z.strictObject({
   job: cutJobSchema,
   timeLimitMs: z.number().int().min(0).max(MAX_SERVER_TIME_LIMIT_MS).optional(),
 });

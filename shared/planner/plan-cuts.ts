@@ -1,6 +1,7 @@
 // The planner's entry points. `planCuts` runs the solver in slices and yields to the event loop between them, so it
 // reports progress and honours an AbortSignal both in a browser Web Worker and in-process on the server;
 // `planCutsSync` runs the same steps without yielding (command line, benchmarks).
+import type { MipSolver } from './core/exact';
 import { solveCore, type CoreProgress, type CoreResult } from './core/solver';
 import { InputError } from '../errors';
 import { validateCutJob, type CutJob } from './job';
@@ -25,6 +26,17 @@ export interface PlanOptions {
   signal?: AbortSignal;
   /** Clock for the time limit, in ms (default: wall time). Benchmarks on a shared machine pass a CPU-time clock. */
   clock?: () => number;
+  /** MIP solver for the exact model on small jobs with several stock types (default: the one given to useMipSolver). */
+  mip?: MipSolver;
+}
+
+let registeredMip: MipSolver | undefined;
+/**
+ * Give the planner a MIP solver (HiGHS's `solve`, loaded by the caller: the engine does no I/O). Without one, small
+ * jobs on several stock types are planned by the column-generation search alone and are proven optimal less often.
+ */
+export function useMipSolver(mip: MipSolver | undefined): void {
+  registeredMip = mip;
 }
 
 export const DEFAULT_TIME_LIMIT_MS = 2000;
@@ -40,7 +52,7 @@ function start(job: CutJob, opts: PlanOptions) {
   if (prep.problem.types.length === 0) throw new InputError('stock', 'stock: no stock bars are available (every quantity is 0)');
   const t0 = clock();
   const limit = Math.max(0, opts.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS);
-  const gen = solveCore(prep.problem, { deadline: t0 + limit, now: clock });
+  const gen = solveCore(prep.problem, { deadline: t0 + limit, now: clock, mip: opts.mip ?? registeredMip });
   return { prep, gen, t0: now() };
 }
 

@@ -40,6 +40,7 @@ export interface CutPlan {
   kerf: number;
   trim: number;
   minOffcut: number;
+  /** lpBound: the LP relaxation's optimum when the root LP finished, else null (`lowerBound` is the certified bound). */
   stats: { elapsedMs: number; greedyBars: number; lpBound: number | null; nodes: number };
 }
 
@@ -47,7 +48,16 @@ const round3 = (v: number): number => Math.round(v * 1000) / 1000;
 
 export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number): CutPlan {
   const { job, problem } = prep;
-  const queues = prep.pieces.map((list) => list.slice());
+  // Each core item's part lines, drawn from one piece at a time as bars take them.
+  const queues = prep.pieces.map((list) => list.map((x) => ({ ...x })));
+  const draw = (i: number): { length: number; label: string } | undefined => {
+    const q = queues[i];
+    while (q.length && q[q.length - 1].qty === 0) q.pop();
+    const top = q[q.length - 1];
+    if (!top) return undefined;
+    top.qty--;
+    return top;
+  };
   const bars: PlannedBar[] = [];
   for (const use of res.solution) {
     for (let c = 0; c < use.mult; c++) {
@@ -56,7 +66,7 @@ export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number)
       const cuts: PlannedCut[] = [];
       use.pattern.counts.forEach((k, i) => {
         for (let t = 0; t < k; t++) {
-          const piece = queues[i].pop();
+          const piece = draw(i);
           if (piece) cuts.push({ length: piece.length, label: piece.label });
         }
       });
@@ -82,8 +92,9 @@ export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number)
   const partsLen = job.parts.reduce((s, p) => s + p.length * p.qty, 0);
   const offcuts = bars.reduce((s, b) => s + b.offcut, 0);
   const cost = bars.reduce((s, b) => s + b.price, 0);
-  const barsLb = prep.byCost ? res.barLowerBound : res.lowerBound;
-  const costLb = prep.byCost ? res.lowerBound : 0;
+  const single = prep.unitPrice !== null;
+  const barsLb = prep.byCost && !single ? res.barLowerBound : res.lowerBound;
+  const costLb = single ? res.lowerBound * prep.unitPrice! : prep.byCost ? res.lowerBound : 0;
   const value = prep.byCost ? cost : bars.length;
   const bound = prep.byCost ? costLb : barsLb;
   return {

@@ -8,12 +8,17 @@ export interface PreparedJob {
   job: ValidCutJob;
   problem: Problem;
   scale: number;
-  /** Per core item: the part lengths (mm) and labels it stands for, one entry per piece. */
-  pieces: { length: number; label: string }[][];
+  /** Per core item: the part lines (length in mm, label, pieces) it stands for; never one entry per piece. */
+  pieces: { length: number; label: string; qty: number }[][];
   /** Core stock type → index in job.stock. */
   stockIndex: number[];
   /** The objective is cost (some stock has a price) rather than bar count. */
   byCost: boolean;
+  /**
+   * Price of the one stock type when there is only one: its cost is price × bars, so the core solves the bar count
+   * (the same search as an unpriced job) and the plan reports the cost. Null otherwise.
+   */
+  unitPrice: number | null;
 }
 
 function decimals(v: number): number {
@@ -31,19 +36,23 @@ export function prepareJob(job: ValidCutJob): PreparedJob {
   const down = (v: number): number => Math.floor(v * scale + 1e-7);
   const kerf = up(job.kerf);
 
-  const byLength = new Map<number, { length: number; label: string }[]>();
+  const byLength = new Map<number, { length: number; label: string; qty: number }[]>();
   for (const p of job.parts) {
+    if (p.qty === 0) continue;
     const key = up(p.length);
     const list = byLength.get(key) ?? [];
-    for (let c = 0; c < p.qty; c++) list.push({ length: p.length, label: p.label });
+    list.push({ length: p.length, label: p.label, qty: p.qty });
     byLength.set(key, list);
   }
-  const keys = [...byLength.keys()].filter((k) => byLength.get(k)!.length > 0).sort((a, b) => b - a);
+  const keys = [...byLength.keys()].sort((a, b) => b - a);
   const sizes = keys.map((k) => k + kerf);
-  const demand = keys.map((k) => byLength.get(k)!.length);
+  const demand = keys.map((k) => byLength.get(k)!.reduce((s, x) => s + x.qty, 0));
   const pieces = keys.map((k) => byLength.get(k)!);
 
   const byCost = job.stock.some((s) => (s.price ?? 0) > 0);
+  const available = job.stock.filter((s) => s.qty !== 0);
+  const unitPrice = byCost && available.length === 1 ? (available[0].price ?? 0) : null;
+  const costed = byCost && unitPrice === null;
   const stockIndex: number[] = [];
   const types: StockType[] = [];
   job.stock.forEach((s, i) => {
@@ -51,17 +60,18 @@ export function prepareJob(job: ValidCutJob): PreparedJob {
     stockIndex.push(i);
     types.push({
       capacity: down(s.length) - up(job.trim) + kerf,
-      cost: byCost ? (s.price ?? 0) : 1,
+      cost: costed ? (s.price ?? 0) : 1,
       qty: s.qty ?? null,
     });
   });
   return {
     job,
-    problem: { sizes, demand, types, costUnit: byCost ? priceUnit(job.stock.map((s) => s.price ?? 0)) : 1 },
+    problem: { sizes, demand, types, costUnit: costed ? priceUnit(job.stock.map((s) => s.price ?? 0)) : 1 },
     scale,
     pieces,
     stockIndex,
     byCost,
+    unitPrice,
   };
 }
 

@@ -1,8 +1,28 @@
 import { orderList as plannerOrderList, type CutJob, type CutPlan } from '../planner';
-import type { OrderList } from './types';
+import type { ConsideredBar, OrderList } from './types';
 
-/** One profile's job and plan as the planner took and gave them. */
-export type PlannedProfile = { profileId: string; profileName: string; job: CutJob; plan: CutPlan };
+/** One profile's job and plan as the planner took and gave them, with the supplier's bars it was offered. */
+export type PlannedProfile = { profileId: string; profileName: string; job: CutJob; plan: CutPlan; considered?: ConsideredBar[] };
+
+/** Which of the offered bars the plan buys, and on what grounds. */
+export function explainChoice(p: PlannedProfile): { considered: ConsideredBar[]; choice: string } {
+  const considered = (p.considered ?? []).map((c) => ({
+    ...c,
+    used: c.offered ? p.plan.bars.filter((b) => b.stock === c.length_mm && b.price === c.price && !isOnHand(p.job, b.stockIndex)).length : 0,
+  }));
+  const offered = considered.filter((c) => c.offered);
+  const bought = offered.filter((c) => c.used > 0).map((c) => `${c.used} × ${c.length_mm} mm at ${c.price}`);
+  const basis = p.plan.optimal
+    ? 'the least cost, then the fewest bars, then the least waste, proven'
+    : `the least cost found in the time allowed (at most ${Math.round(p.plan.gap * 1000) / 10} % above the bound)`;
+  const choice =
+    offered.length === 0
+      ? 'No supplier bars were offered.'
+      : `${offered.length} bar length${offered.length > 1 ? 's' : ''} offered to the planner; it buys ${bought.length ? bought.join(' + ') : 'none (offcuts on hand suffice)'}: ${basis}.`;
+  return { considered, choice };
+}
+
+const isOnHand = (job: CutJob, i: number): boolean => job.stock[i]?.qty !== null && job.stock[i]?.qty !== undefined && (job.stock[i]?.price ?? 0) === 0;
 
 /** A supplier's terms for parts cut to length: a fee per cut, and a price per metre (else the cheapest bar's). */
 export type CutToLengthTerms = { cutFee: number; pricePerMetre?: Readonly<Record<string, number>> };
@@ -18,6 +38,7 @@ export function orderList(profiles: readonly PlannedProfile[], currency: string,
     profileId: p.profileId,
     profileName: p.profileName,
     order: plannerOrderList(p.profileId, p.job, p.plan, { cutFee: terms.cutFee, pricePerMetre: terms.pricePerMetre?.[p.profileId] }),
+    ...(p.considered ? explainChoice(p) : {}),
   }));
   return {
     currency,

@@ -3,7 +3,7 @@ import type { FrameReport } from '../engine/report-types';
 import { shopCutList } from './from-report';
 import { toProfilePlan } from './from-plan';
 import type { PlannedProfile } from './order-list';
-import type { ProfilePlan, ShopCutList } from './types';
+import type { ConsideredBar, ProfilePlan, ShopCutList } from './types';
 
 /** A bar a supplier sells: for one profile, or (profileId null) for any profile they stock. */
 export type StockOffer = { profileId: string | null; length_mm: number; price: number };
@@ -22,7 +22,12 @@ export const FALLBACK_STOCK_MM = 6000;
 export type ShopPlanResult = { cutList: ShopCutList; planned: PlannedProfile[]; plans: ProfilePlan[] };
 
 /** The stock planner's jobs for a frame: its parts per profile, the supplier's bars and the shelf's offcuts. */
-export function cutJobs(report: FrameReport, offers: readonly StockOffer[], shelf: readonly ShelfOffcut[], s: ShopSettings): { profileId: string; profileName: string; job: CutJob }[] {
+export function cutJobs(
+  report: FrameReport,
+  offers: readonly StockOffer[],
+  shelf: readonly ShelfOffcut[],
+  s: ShopSettings,
+): { profileId: string; profileName: string; job: CutJob; considered: ConsideredBar[] }[] {
   const byProfile = new Map<string, { name: string; parts: CutJob['parts'] }>();
   for (const l of report.cut_list) {
     const e = byProfile.get(l.profile) ?? { name: l.profile_name, parts: [] };
@@ -32,10 +37,24 @@ export function cutJobs(report: FrameReport, offers: readonly StockOffer[], shel
   return [...byProfile].map(([profileId, e]) => {
     const longest = Math.max(...e.parts.map((p) => p.length));
     const shortest = Math.min(...e.parts.map((p) => p.length));
-    const bought: StockInput[] = offers.filter((o) => o.profileId === profileId).map((o) => ({ length: o.length_mm, price: o.price }));
-    const general: StockInput[] = offers.filter((o) => o.profileId === null).map((o) => ({ length: o.length_mm, price: o.price }));
-    let stock = bought.length ? bought : general;
-    if (!stock.some((x) => x.length - s.trim_mm >= longest)) stock = [...stock, { length: Math.max(FALLBACK_STOCK_MM, Math.ceil(longest + s.trim_mm)), price: 0 }];
+    // Every bar the supplier quotes that fits the profile, its own or "any profile", goes to the planner, which picks
+    // the cheapest mix; of two quotes for one length the cheaper is offered (the profile's own on a tie).
+    const fitting = offers
+      .filter((o) => o.profileId === profileId || o.profileId === null)
+      .map((o) => ({ o, source: (o.profileId === null ? 'any profile' : 'profile') as ConsideredBar['source'] }))
+      .sort((a, b) => a.o.length_mm - b.o.length_mm || a.o.price - b.o.price || (a.source === 'profile' ? -1 : 1));
+    const considered: ConsideredBar[] = [];
+    const stock: StockInput[] = [];
+    for (const { o, source } of fitting) {
+      const same = considered.find((c) => c.length_mm === o.length_mm && c.offered);
+      considered.push({ length_mm: o.length_mm, price: o.price, source, offered: !same, used: 0, ...(same ? { note: 'the same length is quoted cheaper' } : {}) });
+      if (!same) stock.push({ length: o.length_mm, price: o.price });
+    }
+    if (!stock.some((x) => x.length - s.trim_mm >= longest)) {
+      const length = Math.max(FALLBACK_STOCK_MM, Math.ceil(longest + s.trim_mm));
+      stock.push({ length, price: 0 });
+      considered.push({ length_mm: length, price: 0, source: 'fallback', offered: true, used: 0, note: 'no quoted bar holds the longest part; priced 0' });
+    }
     // Offcuts of one length are one kind of stock, however many rows they came in on.
     const byLength = new Map<number, number>();
     for (const o of shelf) {
@@ -46,6 +65,7 @@ export function cutJobs(report: FrameReport, offers: readonly StockOffer[], shel
       profileId,
       profileName: e.name,
       job: { kerf: report.settings.kerf_mm, trim: s.trim_mm, minOffcut: s.minOffcut_mm, stock: [...onShelf, ...stock], parts: e.parts },
+      considered,
     };
   });
 }

@@ -101,7 +101,26 @@ export type ShopMeta = {
 
 /** The order a supplier receives: per profile, the planner's grouped order list (bars to buy, offcuts taken from the
  * shelf, and the cut-to-length alternative), with totals across profiles. */
-export type OrderProfile = { profileId: string; profileName: string; order: PlannerOrderList };
+/** A bar the supplier quotes that fits the profile, and what the planner made of it. */
+export type ConsideredBar = {
+  length_mm: number;
+  price: number;
+  /** Quoted for this profile, for any profile, or the stand-in when no quoted bar is long enough. */
+  source: 'profile' | 'any profile' | 'fallback';
+  /** Given to the planner (false when the same length is quoted cheaper elsewhere). */
+  offered: boolean;
+  /** Bars of it in the plan. */
+  used: number;
+  note?: string;
+};
+export type OrderProfile = {
+  profileId: string;
+  profileName: string;
+  order: PlannerOrderList;
+  /** The bars offered to the planner and why the plan buys what it buys (absent on orders made before). */
+  considered?: ConsideredBar[];
+  choice?: string;
+};
 export type OrderList = {
   currency: string;
   profiles: OrderProfile[];

@@ -5,7 +5,9 @@ import { calcCli } from './calc-helpers';
 describe('calc section', () => {
   it('has exactly the documented fields', async () => {
     const out = await run(['40x40-s8']);
-    expect(Object.keys(out).sort()).toEqual(['E_MPa', 'Iy_mm4', 'Ix_mm4', 'Wx_mm3', 'Wy_mm3', 'alloy', 'area_mm2', 'mass_kg_per_m', 'profile'].sort());
+    expect(Object.keys(out).sort()).toEqual(
+      ['E_MPa', 'Iy_mm4', 'Ix_mm4', 'Wx_mm3', 'Wy_mm3', 'alloy', 'area_mm2', 'mass_kg_per_m', 'profile', 'Ixy_mm4', 'I1_mm4', 'I2_mm4', 'angle_deg'].sort(),
+    );
     expect(out.profile).toBe('40x40-s8');
     expect(out.alloy).toBe('6063-T5');
   });
@@ -17,6 +19,16 @@ describe('calc section', () => {
     // 224 mm² × 2700 kg/m³ (MatWeb density of 6063) = 0.6048 kg/m.
     expect(out.mass_kg_per_m).toBeCloseTo(0.6048, 9);
     expect(out.E_MPa).toBe(68_900);
+  });
+
+  it('gives the principal axes of an angle: I₁,₂ = (Ix + Iy)/2 ± √(((Ix − Iy)/2)² + Ixy²), 45° for an equal angle (Roark, Table A.1)', async () => {
+    const out = await run(['angle:40x40x4']);
+    expect(out.Ixy_mm4).toBeLessThan(0);
+    expect(out.I1_mm4).toBeCloseTo(out.Ix_mm4 - out.Ixy_mm4, 6);
+    expect(out.I2_mm4).toBeCloseTo(out.Ix_mm4 + out.Ixy_mm4, 6);
+    expect(out.angle_deg).toBeCloseTo(45, 9);
+    const sym = await run(['40x40-s8']);
+    expect(Math.abs(sym.Ixy_mm4)).toBeLessThan(1e-6 * sym.Ix_mm4);
   });
 
   it('names the profile in the error for an unknown one', async () => {

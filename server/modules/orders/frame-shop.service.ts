@@ -8,6 +8,7 @@ import type { FrameEntity } from '../frames/frame.entity';
 import { StockOffcut } from '../stock/stock-offcut.entity';
 import { Supplier, type SupplierEntity } from '../suppliers/supplier.entity';
 import { Workshop } from '../workshops/workshop.entity';
+import { ensureMipSolver } from './mip';
 
 // Everything the shop outputs of one frame need: its report, the plan against a supplier's bars and the shelf,
 // and the facts printed on every page.
@@ -60,5 +61,6 @@ export async function planFrame(
 ): Promise<ShopPlanResult> {
   if (report.cut_list.length === 0) throw new UnprocessableError('This frame has no members to cut yet');
   const shelf = opts.useShelf ? await shelfOf(em, frame.project.workshop.id) : [];
+  await ensureMipSolver();
   return planShop(report, offersOf(opts.supplier), shelf, { trim_mm: opts.trim_mm, minOffcut_mm: opts.minOffcut_mm }, opts.timeLimitMs);
 }

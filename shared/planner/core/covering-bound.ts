@@ -47,3 +47,30 @@ export function coveringCost(types: readonly CoverStock[], need: number): number
   search(0, need, 0);
   return nodes > NODE_LIMIT ? floor : best;
 }
+
+/**
+ * Least Σ capacity of exactly `bars` whole bars (within each type's quantity) costing at most `maxCost` and adding up
+ * to at least `need`: no plan with that many bars at that cost uses less stock. Infinity when none exists; 0 (proves
+ * nothing) past the node limit.
+ */
+export function leastStockLength(types: readonly CoverStock[], bars: number, maxCost: number, need: number): number {
+  const ts = types.filter((t) => t.capacity > 0 && t.qty !== 0).map((t) => ({ cap: t.capacity, cost: t.cost, max: t.qty ?? Infinity }));
+  ts.sort((a, b) => a.cap - b.cap);
+  let best = Infinity;
+  let nodes = 0;
+  const search = (k: number, left: number, cost: number, cap: number): boolean => {
+    if (++nodes > NODE_LIMIT) return false;
+    if (cost > maxCost + 1e-9 || cap >= best) return true;
+    if (left === 0) {
+      if (cap >= need) best = cap;
+      return true;
+    }
+    if (k === ts.length) return true;
+    const t = ts[k];
+    for (let c = 0; c <= Math.min(left, t.max); c++) {
+      if (!search(k + 1, left - c, cost + c * t.cost, cap + c * t.cap)) return false;
+    }
+    return true;
+  };
+  return search(0, bars, 0, 0) ? best : 0;
+}

@@ -9,14 +9,22 @@
 // Written as a generator so a caller can yield to its event loop (progress, cancellation) between steps.
 import { InputError } from '../../errors';
 import { martelloTothL2, materialBound } from './bounds';
-import { coveringCost } from './covering-bound';
+import { coveringCost, leastStockLength } from './covering-bound';
+import { maximalPatterns, solveExact, type MipSolver } from './exact';
+import { lexRefine } from './lex-refine';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
 import { mbsPack } from './mbs';
 import { Repacker } from './repack';
-import { solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
+import { roundUpBound, solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
-/** Share of the time limit the root LP may take before diving starts (dives keep generating columns). */
+/**
+ * The schedule's time scale (ms): every stage's budget is a share of this, not of the time limit, so a run with a
+ * longer limit repeats a shorter run step for step and only goes on after it; its plan is never worse. The shares
+ * were tuned at the product's default limit of 2 s.
+ */
+const SCHEDULE_MS = 2000;
+/** Share of the schedule the root LP may take before diving starts (dives keep generating columns). */
 const ROOT_SHARE = 0.7;
 /** Share of the time limit the minimum-bin-slack restarts may take when they do not reach the bound at once. */
 const MBS_SHARE = 0.01;
@@ -48,6 +56,8 @@ const REPACK_SLICE_MS = 20;
 const PERTURB = 1e-4;
 /** Random perturbation of the fixing order on restarts, in units of the integrality score (1e-6). */
 const RESTART_NOISE = 1e6;
+/** Jobs on several stock types up to this many pieces go to the exact pattern model first (when a MIP solver is given). */
+const EXACT_MAX_PIECES = 150;
 
 export type Phase = 'greedy' | 'bound' | 'improve' | 'done';
 
@@ -62,6 +72,8 @@ export interface CoreOptions {
   /** Absolute time (per `now`) at which to stop improving. */
   deadline: number;
   now: () => number;
+  /** MIP solver for the exact pattern model on small jobs with several stock types; without it they go to the search. */
+  mip?: MipSolver;
 }
 
 export interface CoreResult {
@@ -70,12 +82,14 @@ export interface CoreResult {
   bars: number;
   /** Certified lower bound on the cost (on the bar count when no prices are given). */
   lowerBound: number;
+  /** Proven optimal for the whole order: least cost, then fewest bars at that cost, then least stock length. */
   optimal: boolean;
   /** Certified lower bound on the number of bars (same as lowerBound when every bar costs 1). */
   barLowerBound: number;
-  /** The best linear-programming bound computed, if any (unrounded). */
+  /** The LP relaxation's optimum (unrounded) when the root LP finished; null when it did not run or did not finish. */
   lpBound: number | null;
-  stats: { nodes: number; lpIterations: number; pricings: number; greedyCost: number; greedyBars: number };
+  /** exact: stages the exact model proved (0–3), −1 when it did not run. */
+  stats: { nodes: number; lpIterations: number; pricings: number; greedyCost: number; greedyBars: number; exact: number };
 }
 
 interface Incumbent {
@@ -128,9 +142,28 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   const barBound = martelloTothL2(p.sizes, p.demand, cmax);
 
   let lower = combinatorialBound(p);
-  const stats = { nodes: 0, lpIterations: 0, pricings: 0, greedyCost, greedyBars };
+  const stats = { nodes: 0, lpIterations: 0, pricings: 0, greedyCost, greedyBars, exact: -1 };
   const best = (): Incumbent => inc as Incumbent;
+  let lexProven = false;
+  const need = p.sizes.reduce((s, size, i) => s + size * p.demand[i], 0);
+  // The cost bound proves the cost; the bar count and the stock length at that cost need proofs of their own, except
+  // on one stock type, where both follow from the cost.
+  /** At a proven least cost, settle the bar count and stock length (./lex-refine). */
+  const refine = (): void => {
+    const b = best();
+    if (lexProven || b.cost > lower + improveTol || p.types.length === 1) return;
+    const r = lexRefine(p, b.cost, b, improveTol, () => opts.now() > opts.deadline);
+    if (r.solution) offer(r.solution);
+    lexProven = r.proven;
+  };
+  const lexOptimal = (b: Incumbent): boolean => {
+    if (b.cost > lower + improveTol) return false;
+    if (p.types.length === 1) return true;
+    if (b.bars > barBound) return false;
+    return b.used <= leastStockLength(p.types, b.bars, b.cost + improveTol, need);
+  };
   const done = (lpBound: number | null, master: Master | null): CoreResult => {
+    refine();
     if (master) {
       stats.lpIterations = master.lp.iterations;
       stats.pricings = master.knapsackCalls;
@@ -141,7 +174,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
       cost: b.cost,
       bars: b.bars,
       lowerBound: lower,
-      optimal: b.cost <= lower + improveTol,
+      optimal: lexProven || lexOptimal(b),
       barLowerBound: unitCost ? Math.max(barBound, lower) : barBound,
       lpBound,
       stats,
@@ -160,7 +193,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   if (unitCost && p.types.length === 1 && best().cost > lower + improveTol) {
     const bars = mbsPack(p.sizes, p.demand, p.types[0].capacity, {
       target: lower,
-      deadline: t0 + (opts.deadline - t0) * MBS_SHARE,
+      deadline: t0 + SCHEDULE_MS * MBS_SHARE,
       now: opts.now,
     });
     const qty = p.types[0].qty;
@@ -187,19 +220,44 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     }
   }
   yield { phase: 'greedy', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
-  if (best().cost <= lower + improveTol) return done(null, null);
+  if (lexOptimal(best())) return done(null, null);
   const parts = p.demand.reduce((a, b) => a + b, 0);
-  const stallMs = Math.min((opts.deadline - t0) * REPACK_STALL_SHARE, parts * REPACK_STALL_MS_PER_PART);
-  yield* repack(t0 + (opts.deadline - t0) * REPACK_FIRST_SHARE, false, stallMs);
+  // Several stock types, a small job: first the mixes of bars in order with an exhaustive packing test, then (when that
+  // cannot settle it) the exact model. Both have fixed budgets or the whole time limit, so their result only improves
+  // with more time.
+  if (p.types.length > 1 && parts <= EXACT_MAX_PIECES) {
+    const r = lexRefine(p, lower, best(), improveTol, () => opts.now() > opts.deadline);
+    if (r.solution) offer(r.solution);
+    if (r.proven) {
+      lexProven = true;
+      lower = Math.max(lower, roundUpBound(p, best().cost));
+      stats.exact = 0;
+      return done(null, null);
+    }
+  }
+  if (opts.mip && p.types.length > 1 && parts <= EXACT_MAX_PIECES) {
+    const patterns = maximalPatterns(p);
+    if (patterns) {
+      const out = solveExact(p, patterns, opts.mip, () => (opts.deadline - opts.now()) / 1000);
+      if (out.solution) offer(out.solution);
+      if (out.cost !== null) lower = Math.max(lower, roundUpBound(p, out.cost));
+      stats.exact = out.proven;
+      yield { phase: 'bound', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
+      if (out.proven === 1 || lexOptimal(best()) || opts.now() > opts.deadline) return done(null, null);
+    }
+  }
+  const stallMs = Math.min(SCHEDULE_MS * REPACK_STALL_SHARE, parts * REPACK_STALL_MS_PER_PART);
+  yield* repack(t0 + SCHEDULE_MS * REPACK_FIRST_SHARE, false, stallMs);
   if (best().cost <= lower + improveTol) return done(null, null);
 
   const master = new Master(p);
   for (const u of best().sol) master.addPattern(u.pattern);
   // The root may not converge on hard instances; leave most of the time to the dives, which keep generating columns.
-  const rootDeadline = t0 + (opts.deadline - t0) * ROOT_SHARE;
+  const rootDeadline = t0 + SCHEDULE_MS * ROOT_SHARE;
   const root = master.solve({ deadline: rootDeadline, now: opts.now, stopAt: best().cost - improveTol });
   lower = Math.max(lower, master.rounded(root.lowerBound));
-  const lpBound = root.lowerBound;
+  // An unfinished root LP's value is no bound (its certified part is already in `lower`).
+  const lpBound = root.converged ? root.lowerBound : null;
   yield { phase: 'bound', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   const closed = (): boolean => best().cost <= lower + improveTol || opts.now() > opts.deadline;
 
@@ -335,7 +393,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     if (round === 0 && exhausted) break;
     // Repacking gets as long as the dive took (short dives on short lists, which the dives solve best).
     const diveTime = opts.now() - diveStart;
-    if (!closed()) yield* repack(opts.now() + Math.min(diveTime, (opts.deadline - t0) * REPACK_ROUND_SHARE), true);
+    if (!closed()) yield* repack(opts.now() + Math.min(diveTime, SCHEDULE_MS * REPACK_ROUND_SHARE), true);
   }
   yield { phase: 'done', bestCost: best().cost, bestBars: best().bars, lowerBound: lower };
   return done(lpBound, master);

@@ -75,3 +75,27 @@ describe('what changed', () => {
     expect(d.spare).toEqual([]);
   });
 });
+
+describe('what changed: machining', () => {
+  it('switching the demo pod to end connectors keeps every length but lists the new end taps and access holes', () => {
+    const doc = demoFrameDocument();
+    const r0 = computeReport(doc);
+    const r1 = computeReport({ ...doc, settings: { ...doc.settings, defaultJoin: 'end-connector' } }, { previous: r0 });
+    const d = diffReports(r0, r1);
+    // An end connector needs a tapped end on the butting member and an access hole in the one it butts against
+    // (DOMAIN.md, joining methods); the bracket needed neither.
+    const taps = r1.members.reduce((n, m) => n + m.ops.filter((o) => o.kind === 'end-tap').length, 0);
+    const holes = r1.members.reduce((n, m) => n + m.ops.filter((o) => o.kind === 'access-hole').length, 0);
+    expect(taps).toBeGreaterThan(0);
+    expect(d.totals.end_taps_added).toBe(taps);
+    expect(d.totals.access_holes_added).toBe(holes);
+    expect(d.totals.machining_parts).toBe(r1.members.filter((m) => m.ops.length > 0).length);
+    const tapped = d.plan.find((s) => s.machining.some((x) => x.startsWith('end tap')));
+    expect(tapped?.action).toBe('keep');
+    expect(d.parts.find((p) => p.member_id === tapped?.member_id)?.machining_added.length).toBeGreaterThan(0);
+    // And back again: the taps and holes are no longer needed.
+    const back = diffReports(r1, computeReport(doc, { previous: r1 }));
+    expect(back.totals.machining_parts).toBe(0);
+    expect(back.parts.filter((p) => p.machining_removed.length > 0).length).toBe(r1.members.filter((m) => m.ops.length > 0).length);
+  });
+});

@@ -24,7 +24,8 @@ describe('workshop bench example (hand-drawn, 40×40 legs, 40×80 top rails)', (
   it('checks the shelf rails under the tool chest by hand (AWC DA6 Fig. 1, shock factor 1 for a bench)', () => {
     // 45 kg over the full 1420 mm of two rails: w = 45 × 9.80665 / 2 / 1420 N/mm; δ = 5wL⁴/384EI.
     const s = sectionOf(resolveProfile('40x40-s8'));
-    const w = (45 * 9.80665) / 2 / 1420;
+    // Plus the rail's own weight, a UDL too (AISC Manual Table 3-23): mass per metre × g.
+    const w = (45 * 9.80665) / 2 / 1420 + (s.mass_kg_per_m / 1000) * 9.80665;
     const c = r.loads.members.find((m) => m.member_id === 'S1');
     expect(c?.spans[0].deflection_mm).toBeCloseTo((5 * w * 1420 ** 4) / (384 * s.E_MPa * s.Ix_mm4), 4);
   });

@@ -15,6 +15,8 @@ const s40 = sectionOf(resolveProfile('40x40-s8'));
 const EI = s40.E_MPa * s40.Ix_mm4;
 const check = (r: FrameReport, id: string) => r.loads.members.find((m) => m.member_id === id);
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
+// Every member carries its own weight as a UDL (AISC Manual Table 3-23): mass per metre × g, N/mm.
+const sw40 = (s40.mass_kg_per_m / 1000) * g;
 
 describe('a module on the top rails of the hand-worked box', () => {
   // A 20 kg module 920 mm wide over the whole top: shared by the two rails R1, R2 (equal share), each carrying
@@ -23,11 +25,13 @@ describe('a module on the top rails of the hand-worked box', () => {
   const r = computeReport(doc);
   const L = 920;
   const W = (20 * g * 2.5) / 2;
-  const w = W / L;
+  const w = W / L + 2.5 * sw40;
 
   it('reproduces the simply supported UDL by hand: δ = 5wL⁴/384EI, M = wL²/8 (fixed ends: wL⁴/384EI, wL²/12)', () => {
     const c = check(r, 'R1');
-    expect(c?.load_N).toBeCloseTo(W, 2);
+    expect(c?.load_N).toBeCloseTo(w * L, 2);
+    expect(c?.self_weight_N).toBeCloseTo(sw40 * L, 2);
+    expect(c?.governing_case).toBe('shock');
     const [span] = c?.spans ?? [];
     expect(span.span_mm).toBe(L);
     expect(rel(span.deflection_mm, (5 * w * L ** 4) / (384 * EI))).toBeLessThan(1e-4);
@@ -42,14 +46,17 @@ describe('a module on the top rails of the hand-worked box', () => {
     expect(c?.utilisation).toBeCloseTo(u, 4);
   });
 
-  it('passes the reactions down to the uprights: each takes a quarter of the factored weight', () => {
+  it('passes the reactions down to the uprights: each takes a quarter of the factored weight, and its own', () => {
     const axial = r.loads.uprights.map((u) => u.axial_N);
     expect(axial).toHaveLength(4);
-    for (const a of axial) expect(a).toBeCloseTo((20 * g * 2.5) / 4, 2);
+    // Each upright: a quarter of the module, half of a rail (920 mm) and half of a cross-member (420 mm), and
+    // its own 800 mm, all × 2.5.
+    for (const a of axial) expect(a).toBeCloseTo(2.5 * ((20 * g) / 4 + sw40 * (460 + 210 + 800)), 2);
   });
 
   it('scales with the shock factor', () => {
-    const still = computeReport(boxFrame({ settings: { shockFactor: 1 }, modules: [module('box', [920, 500, 100], 20, [40, 0, 800])] }));
+    const still = computeReport(boxFrame({ settings: { shockFactor: 1, inVehicle: false }, modules: [module('box', [920, 500, 100], 20, [40, 0, 800])] }));
+    // Module and self-weight both scale: the vertical shock case is the static case times 2.5.
     expect(check(r, 'R1')?.spans[0].deflection_mm).toBeCloseTo(2.5 * (check(still, 'R1')?.spans[0].deflection_mm as number), 4);
   });
 });
@@ -59,22 +66,24 @@ describe('other load cases against the tables', () => {
     // A 300 mm wide module hung centrally under R1 (L = 920): hangers at a = (920 − 300)/2 = 310 from each end.
     const doc = parseFrameDocument({
       schemaVersion: 1,
-      settings: { shockFactor: 1 },
+      settings: { shockFactor: 1, inVehicle: false },
       members: [member('U1', 'z', 0, 800, { x: 0, y: 0 }), member('U2', 'z', 0, 800, { x: 960, y: 0 }), member('R1', 'x', 40, 960, { y: 0, z: 760 })],
       modules: [module('sink', [300, 40, 150], 12, [350, 0, 610], { bearing: 'hung' })],
     });
     const r = computeReport(doc);
     const [L, a, P] = [920, 310, (12 * g) / 2];
     const c = check(r, 'R1');
-    expect(rel(c?.spans[0].deflection_mm as number, (P * a * (3 * L * L - 4 * a * a)) / (24 * EI))).toBeLessThan(1e-4);
-    expect(rel(c?.spans[0].moment_Nmm as number, P * a)).toBeLessThan(1e-4);
+    // Plus the rail's own weight, a UDL (AWC DA6 Fig. 1): both give their largest figures at midspan.
+    const d = (P * a * (3 * L * L - 4 * a * a)) / (24 * EI) + (5 * sw40 * L ** 4) / (384 * EI);
+    expect(rel(c?.spans[0].deflection_mm as number, d)).toBeLessThan(1e-4);
+    expect(rel(c?.spans[0].moment_Nmm as number, P * a + (sw40 * L * L) / 8)).toBeLessThan(1e-4);
   });
 
   it('a bracket arm with a load at its tip: a cantilever, δ = PL³/3EI (AWC DA6 Fig. 14), limit 2L/N', () => {
     // Arm R butts into upright U at its start and is free at the end, 400 mm out; a narrow 5 kg module at the tip.
     const doc = parseFrameDocument({
       schemaVersion: 1,
-      settings: { shockFactor: 1 },
+      settings: { shockFactor: 1, inVehicle: false },
       members: [member('U', 'z', 0, 800, { x: 0, y: 0 }), member('R', 'x', 40, 440, { y: 0, z: 500 })],
       modules: [module('lamp', [0.8, 40, 50], 5, [439.2, 0, 540])],
     });
@@ -84,8 +93,10 @@ describe('other load cases against the tables', () => {
     const [P, a] = [5 * g, 399.6];
     expect(c?.spans[0].support).toBe('cantilever');
     // Deflection at the free end, load at a from the fixed end: Pa²(3L − a)/6EI; at a = L this is PL³/3EI.
-    expect(rel(c?.spans[0].deflection_mm as number, (P * a ** 2 * (3 * 400 - a)) / (6 * EI))).toBeLessThan(1e-4);
-    expect(rel(c?.spans[0].moment_Nmm as number, P * a)).toBeLessThan(1e-6);
+    // Plus the arm's own weight: wL⁴/8EI at the tip and wL²/2 at the root (AWC DA6 Fig. 12).
+    const d = (P * a ** 2 * (3 * 400 - a)) / (6 * EI) + (sw40 * 400 ** 4) / (8 * EI);
+    expect(rel(c?.spans[0].deflection_mm as number, d)).toBeLessThan(1e-4);
+    expect(rel(c?.spans[0].moment_Nmm as number, P * a + (sw40 * 400 * 400) / 2)).toBeLessThan(1e-5);
     expect(c?.spans[0].limit_mm).toBeCloseTo((2 * 400) / 240, 3);
   });
 
@@ -94,7 +105,7 @@ describe('other load cases against the tables', () => {
     // each bearer's load; everything reaches the uprights.
     const doc = parseFrameDocument({
       schemaVersion: 1,
-      settings: { shockFactor: 1 },
+      settings: { shockFactor: 1, inVehicle: false },
       members: [
         member('U1', 'z', 0, 800, { x: 0, y: 0 }),
         member('U2', 'z', 0, 800, { x: 960, y: 0 }),
@@ -110,9 +121,12 @@ describe('other load cases against the tables', () => {
     const r = computeReport(doc);
     const total = 40 * g;
     expect(r.modules[0].bears_on.map((b) => b.member_id)).toEqual(['b1', 'b2']);
-    expect(check(r, 'F')?.load_N).toBeCloseTo(total / 2, 2);
-    expect(check(r, 'B')?.load_N).toBeCloseTo(total / 2, 2);
-    expect(r.loads.uprights.reduce((s, u) => s + u.axial_N, 0)).toBeCloseTo(total, 2);
+    // Each rail: half the module, half of each 420 mm bearer's own weight, and its own 920 mm.
+    const rail = total / 2 + sw40 * (420 + 920);
+    expect(check(r, 'F')?.load_N).toBeCloseTo(rail, 2);
+    expect(check(r, 'B')?.load_N).toBeCloseTo(rail, 2);
+    // Everything reaches the uprights: the module and every member's weight (4 × 800 + 2 × 920 + 2 × 420 mm).
+    expect(r.loads.uprights.reduce((s, u) => s + u.axial_N, 0)).toBeCloseTo(total + sw40 * (3200 + 1840 + 840), 2);
   });
 
   it('flags a member over its limit and a module that bears on nothing', () => {

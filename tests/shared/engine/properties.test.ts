@@ -51,7 +51,7 @@ describe('report properties (fast-check)', () => {
       }),
       { numRuns: 40 },
     );
-  });
+  }, 120_000);
 
   it('mass is additive: frame + hardware + modules = total, and the frame is the sum of its members', () => {
     fc.assert(
@@ -65,7 +65,7 @@ describe('report properties (fast-check)', () => {
       }),
       { numRuns: 25 },
     );
-  });
+  }, 120_000);
 
   it('adding a free-standing member adds its length × mass per metre, and two end caps', () => {
     const s = sectionOf(resolveProfile('30x30-s8'));
@@ -82,7 +82,7 @@ describe('report properties (fast-check)', () => {
       }),
       { numRuns: 15 },
     );
-  });
+  }, 120_000);
 
   it('is deterministic, and a swap undone gives the same report', () => {
     fc.assert(
@@ -94,5 +94,5 @@ describe('report properties (fast-check)', () => {
       }),
       { numRuns: 20 },
     );
-  });
+  }, 120_000);
 });

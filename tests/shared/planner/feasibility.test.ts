@@ -26,7 +26,10 @@ const jobArb: fc.Arbitrary<CutJob> = fc
     kerf: r.kerf,
     trim: r.trim,
     minOffcut: r.minOffcut,
-    stock: [{ length: r.main.length, price: r.main.price, qty: null }, ...r.extra],
+    // Prices on every line or on none: a line without a price beside priced ones is refused (strict input).
+    stock: [{ length: r.main.length, price: r.main.price, qty: null }, ...r.extra].map((s) =>
+      r.main.price === undefined ? { ...s, price: undefined } : { ...s, price: s.price ?? 0 },
+    ),
     parts: r.parts.map((p, i) => ({ ...p, label: String.fromCharCode(65 + i) })),
   }));
 

@@ -1,10 +1,11 @@
 // Independent checks used by the planner tests: plan feasibility from first principles, and an exact minimum bar
 // count by exhaustive search (small jobs only).
 import type { CutJob, CutPlan } from '../../../shared/planner';
+import { DEFAULT_KERF_MM } from '../../../shared/planner/job';
 
 export function checkPlan(job: CutJob, plan: CutPlan): string[] {
   const errs: string[] = [];
-  const kerf = job.kerf ?? 0;
+  const kerf = job.kerf ?? DEFAULT_KERF_MM;
   const trim = job.trim ?? 0;
   const minOffcut = job.minOffcut ?? 0;
   const want = new Map<string, number>();

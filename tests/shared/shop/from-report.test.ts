@@ -35,9 +35,16 @@ describe('shop cut list from the engine report', () => {
 });
 
 describe('planner jobs for a frame', () => {
-  it('uses the supplier’s bars for the profile, else their bars for any profile', () => {
+  it('offers the planner the supplier’s bars for the profile and their bars for any profile', () => {
     const [job] = cutJobs(report, [{ profileId: null, length_mm: 3000, price: 21 }, { profileId: '30x30-s8', length_mm: 6000, price: 38 }], [], settings);
-    expect(job.job.stock).toEqual([{ length: 6000, price: 38 }]);
+    expect(job.job.stock).toEqual([
+      { length: 3000, price: 21 },
+      { length: 6000, price: 38 },
+    ]);
+    expect(job.considered.map((c) => [c.length_mm, c.source, c.offered])).toEqual([
+      [3000, 'any profile', true],
+      [6000, 'profile', true],
+    ]);
     const [general] = cutJobs(report, [{ profileId: null, length_mm: 3000, price: 21 }], [], settings);
     expect(general.job.stock).toEqual([{ length: 3000, price: 21 }]);
   });
