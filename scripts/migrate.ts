@@ -4,18 +4,35 @@
 //   tsx scripts/migrate.ts status     list executed and pending migrations
 // Reads DATABASE_URL (through server/config.ts).
 import { pathToFileURL } from 'node:url';
+import pg from 'pg';
 import { loadConfig } from '../server/config';
 import { createOrm } from '../server/db';
 
-/** Runs every pending migration; returns the names it ran (empty when the schema is up to date). */
+/** pg_advisory_lock key for migrations: any fixed bigint, the same for every server and script on the database. */
+export const MIGRATION_LOCK_KEY = 5_117_113_000_101;
+
+/**
+ * Runs every pending migration; returns the names it ran (empty when the schema is up to date). Two servers
+ * starting at once on one database take turns: the second waits on a PostgreSQL advisory lock, then finds
+ * nothing left to run.
+ */
 export async function runMigrations(databaseUrl?: string): Promise<string[]> {
   const config = loadConfig(databaseUrl ? { ...process.env, DATABASE_URL: databaseUrl } : process.env);
-  const orm = await createOrm(config);
+  const lock = new pg.Client({ connectionString: config.databaseUrl });
+  await lock.connect();
   try {
-    const done = await orm.getMigrator().up();
-    return done.map((m) => m.name);
+    await lock.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+    const orm = await createOrm(config);
+    try {
+      const done = await orm.getMigrator().up();
+      return done.map((m) => m.name);
+    } finally {
+      await orm.close(true);
+    }
   } finally {
-    await orm.close(true);
+    // Ending the session releases the lock too, should the unlock itself fail.
+    await lock.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]).catch(() => undefined);
+    await lock.end();
   }
 }
 

@@ -9,11 +9,11 @@ import type { Config } from './config';
 import { createSessionPool, type Orm } from './db';
 import { NotFoundError } from './errors';
 import { csrfProtection } from './http/csrf';
-import { errorHandler, type ErrorLogger } from './http/error-handler';
+import { errorHandler, loggableError, type ErrorLogger } from './http/error-handler';
 import { createSessionStore, sessionMiddleware } from './http/session';
 import { authRouter } from './modules/auth/auth.routes';
 import { framesRouter } from './modules/frames/frames.routes';
-import { healthRouter } from './modules/health/health.routes';
+import { createHealthPool, healthRouter } from './modules/health/health.routes';
 import { projectsRouter } from './modules/projects/projects.routes';
 import { workshopsRouter } from './modules/workshops/workshops.routes';
 import { attachmentsRouter } from './modules/attachments/attachments.routes';
@@ -26,6 +26,7 @@ import { plannerRouter } from './modules/planner/planner.routes';
 import { invitationsRouter } from './modules/invitations/invitations.routes';
 import { sharingRouter } from './modules/sharing/sharing.routes';
 import { activityRouter } from './modules/activity/activity.routes';
+import { WorkerPool } from './workers/pool';
 
 export interface Services {
   orm: Orm;
@@ -34,12 +35,14 @@ export interface Services {
   sessionStore?: session.Store;
   /** Where unexpected errors are reported; defaults to stderr. */
   logError?: ErrorLogger;
+  /** Worker threads for plans and documents; when omitted the app starts its own (closed by disposeApp). */
+  workers?: WorkerPool;
 }
 
 const ownedStores = new WeakMap<Express, { close(): Promise<void> }>();
 
 const defaultLogger: ErrorLogger = (message, err) => {
-  console.error(message, err);
+  console.error(`${message}: ${loggableError(err)}`);
 };
 
 /** Hashed build output: a new build gives new names, so a copy never needs checking again. */
@@ -82,18 +85,24 @@ export function createApp(services: Services): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
 
+  const owned: (() => Promise<void>)[] = [];
   let store = services.sessionStore;
   if (!store) {
     const pool = createSessionPool(config);
     const own = createSessionStore(pool);
-    ownedStores.set(app, {
-      close: async () => {
-        (own as session.Store & { close?: () => void }).close?.();
-        await pool.end();
-      },
+    owned.push(async () => {
+      (own as session.Store & { close?: () => void }).close?.();
+      await pool.end();
     });
     store = own;
   }
+  let workers = services.workers;
+  if (!workers) {
+    const own = new WorkerPool();
+    owned.push(() => own.close());
+    workers = own;
+  }
+  ownedStores.set(app, { close: async () => void (await Promise.all(owned.map((c) => c()))) });
 
   // Upgrading sub-requests to https only makes sense when the site is served over https.
   app.use(
@@ -103,7 +112,9 @@ export function createApp(services: Services): Express {
   );
 
   // Before the session, so health checks and static files never touch the session table.
-  app.use('/api', healthRouter(orm));
+  const healthPool = createHealthPool(config.databaseUrl);
+  owned.push(() => healthPool.end());
+  app.use('/api', healthRouter(healthPool));
   if (config.serveClient) app.use(clientFiles(config.clientDir));
 
   const api = express.Router();
@@ -117,11 +128,11 @@ export function createApp(services: Services): Express {
   api.use(framesRouter(orm));
   api.use(suppliersRouter(orm));
   api.use(ordersRouter(orm, config));
-  api.use(cuttingRouter(orm));
+  api.use(cuttingRouter(orm, workers));
   api.use(stockRouter(orm));
   api.use(attachmentsRouter(orm));
   api.use(outboxRouter(orm, config));
-  api.use(plannerRouter());
+  api.use(plannerRouter(workers));
   api.use(invitationsRouter(orm, config));
   api.use(sharingRouter(orm, config));
   api.use(activityRouter(orm));

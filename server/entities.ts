@@ -16,7 +16,8 @@ import { ShareLink } from './modules/sharing/share-link.entity';
 import { Invitation } from './modules/invitations/invitation.entity';
 import { PasswordReset } from './modules/auth/password-reset.entity';
 import { Activity } from './modules/activity/activity.entity';
+import { SignInThrottle } from './modules/auth/sign-in-throttle.entity';
 
 /** Every entity the ORM knows, listed explicitly (no folder scanning). */
-export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment, ProjectClient, ShareLink, Invitation, PasswordReset, Activity];
+export const entities = [User, Workshop, Membership, Project, Frame, FrameRevision, Supplier, Order, CutSession, CutTick, StockOffcut, CustomProfile, Attachment, ProjectClient, ShareLink, Invitation, PasswordReset, Activity, SignInThrottle];
 export { Frame, FrameRevision, Membership, Project, User, Workshop };

@@ -6,6 +6,8 @@ import { ERROR_STATUS } from '@shared/api/errors';
 
 export class HttpError extends Error {
   readonly status: number;
+  /** Seconds a client should wait before trying again (sent as Retry-After with 429 and 503). */
+  retryAfterS?: number;
   constructor(
     readonly code: ErrorCode,
     message: string,

@@ -1,21 +1,28 @@
 import type { Server } from 'node:http';
-import { createApp } from './app';
+import { createApp, disposeApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createOrm, createSessionPool } from './db';
 import { createSessionStore } from './http/session';
+import { WorkerPool } from './workers/pool';
 
 // Listen, and on SIGINT/SIGTERM stop taking connections, let requests in flight finish, then close the
 // session store, its pool and the ORM, so no transaction is left half-done.
 
 async function main(): Promise<void> {
   const config = loadConfig();
+  // A made-up secret would differ between servers on one database (a session valid on one only) and end every
+  // session on restart: only a development server may run without one.
+  if (config.sessionSecretGenerated && config.env !== 'development') {
+    throw new ConfigError(`Invalid environment:\n  SESSION_SECRET: required to serve when NODE_ENV=${config.env}`);
+  }
   if (config.sessionSecretGenerated) {
     console.warn('SESSION_SECRET is not set: using a random one, so sessions end when the server stops.');
   }
   const orm = await createOrm(config);
   const pool = createSessionPool(config);
   const sessionStore = createSessionStore(pool);
-  const app = createApp({ orm, config, sessionStore });
+  const workers = new WorkerPool();
+  const app = createApp({ orm, config, sessionStore, workers });
 
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, (err?: Error) => (err ? reject(err) : resolve(s)));
@@ -35,6 +42,8 @@ async function main(): Promise<void> {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
     (sessionStore as typeof sessionStore & { close?: () => void }).close?.();
+    await workers.close();
+    await disposeApp(app);
     await pool.end();
     await orm.close(true);
     process.exit(0);

@@ -18,7 +18,9 @@ export function ormOptions(config: Pick<Config, 'databaseUrl' | 'dbPoolMax' | 'l
     // Fail loudly if something uses the global EntityManager outside a request context.
     allowGlobalContext: false,
     forceUtcTimezone: true,
-    pool: { min: 0, max: config.dbPoolMax },
+    // A request waits at most 5 s for a connection: with the database down it gets a 503 rather than hanging.
+    pool: { min: 0, max: config.dbPoolMax, acquireTimeoutMillis: 5_000 },
+    driverOptions: { connection: { connectionTimeoutMillis: 5_000 } },
     debug: config.logSql,
     schemaGenerator: { skipTables: [SESSION_TABLE] },
     migrations: {

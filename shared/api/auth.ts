@@ -1,12 +1,11 @@
 import { z } from 'zod';
-import { emailSchema, idSchema } from './common';
+import { emailSchema, idSchema, text } from './common';
 import { roleSchema } from './roles';
 
 // bcrypt only reads the first 72 bytes of a password; a longer one would be silently truncated.
 const BCRYPT_MAX_BYTES = 72;
 
-export const passwordSchema = z
-  .string({ message: 'Required' })
+export const passwordSchema = text(z.string({ message: 'Required' }))
   .min(10, { message: 'At least 10 characters' })
   .refine((p) => new TextEncoder().encode(p).length <= BCRYPT_MAX_BYTES, {
     message: `At most ${BCRYPT_MAX_BYTES} bytes`,
@@ -15,13 +14,13 @@ export const passwordSchema = z
 export const signUpRequestSchema = z.object({
   email: emailSchema,
   password: passwordSchema,
-  name: z.string({ message: 'Required' }).trim().min(1, { message: 'Must not be empty' }).max(100, { message: 'At most 100 characters' }),
+  name: text(z.string({ message: 'Required' }).trim().min(1, { message: 'Must not be empty' }).max(100, { message: 'At most 100 characters' })),
 });
 export type SignUpRequest = z.input<typeof signUpRequestSchema>;
 
 export const signInRequestSchema = z.object({
   email: emailSchema,
-  password: z.string({ message: 'Required' }).min(1, { message: 'Must not be empty' }).max(1024),
+  password: text(z.string({ message: 'Required' }).min(1, { message: 'Must not be empty' }).max(1024)),
 });
 export type SignInRequest = z.input<typeof signInRequestSchema>;
 

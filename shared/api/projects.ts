@@ -1,12 +1,12 @@
 import { z } from 'zod';
-import { idSchema, isoDateSchema, nameSchema } from './common';
+import { idSchema, isoDateSchema, nameSchema, text } from './common';
 import { frameSummarySchema } from './frames';
 import { roleSchema } from './roles';
 
 export const projectParamsSchema = z.object({ projectId: idSchema });
 
-const clientSchema = z.string({ message: 'Must be text' }).trim().max(200, { message: 'At most 200 characters' });
-const notesSchema = z.string({ message: 'Must be text' }).max(5000, { message: 'At most 5000 characters' });
+const clientSchema = text(z.string({ message: 'Must be text' }).trim().max(200, { message: 'At most 200 characters' }));
+const notesSchema = text(z.string({ message: 'Must be text' }).max(5000, { message: 'At most 5000 characters' }));
 
 /** GET /api/workshops/:workshopId/projects items; also returned by POST (201) and PATCH. `client`/`notes` '' when unset. */
 export const projectSummarySchema = z.object({

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { WhatChanged } from '../engine/diff';
 import type { CsvRowError } from '../shop/csv-import';
 import type { OrderList, ProfilePlan, ShopCutList, ShopMeta } from '../shop/types';
-import { idSchema, nameSchema, userRefSchema } from './common';
+import { idSchema, nameSchema, text, userRefSchema } from './common';
 
 // Shop outputs and ordering: suppliers, orders, the saw's cutting state, shelf stock, imports and attachments.
 
@@ -14,7 +14,7 @@ export const currencySchema = z
 
 export const supplierStockLineSchema = z.object({
   /** A profile id, or null for a bar length and price they sell in any profile. */
-  profile: z.string().trim().min(1).max(64).nullable(),
+  profile: text(z.string().trim().min(1).max(64)).nullable(),
   length_mm: z.number({ message: 'A length in mm' }).positive({ message: 'Must be more than 0' }).max(20000, { message: 'At most 20000 mm' }),
   price: z.number({ message: 'A price' }).min(0, { message: 'Must not be negative' }).max(100000, { message: 'At most 100000' }),
 });
@@ -26,7 +26,7 @@ export const supplierInputSchema = z.object({
   currency: currencySchema.default('EUR'),
   stock: z.array(supplierStockLineSchema).max(50, { message: 'At most 50 stock lines' }).default([]),
   cutFee: z.number({ message: 'A fee per cut' }).min(0, { message: 'Must not be negative' }).max(1000).default(0),
-  notes: z.string().max(2000, { message: 'At most 2000 characters' }).default(''),
+  notes: text(z.string().max(2000, { message: 'At most 2000 characters' })).default(''),
 });
 export type SupplierInput = z.input<typeof supplierInputSchema>;
 export const supplierPatchSchema = supplierInputSchema.partial();
@@ -131,7 +131,7 @@ export type CuttingState = {
   canRestart: boolean;
 };
 
-export const tickRequestSchema = z.object({ cutKey: z.string().min(3).max(200) });
+export const tickRequestSchema = z.object({ cutKey: text(z.string().min(3).max(200)) });
 export const startCuttingSchema = z.object({ settings: shopSettingsSchema.prefault({}), restart: z.boolean().default(false) });
 export const frameIdParamsSchema = z.object({ frameId: idSchema });
 

@@ -1,4 +1,5 @@
 import { InputError } from '../errors';
+import { LIMITS } from '../limits';
 import { AXES, crossAxes, type Axis } from '../model/axis';
 import type { FrameDocument } from '../model/frame-document';
 import type { Member } from '../model/member';
@@ -111,9 +112,15 @@ export function resolveMembers(
   }
 
   const out: MemberGeometry[] = [];
+  let total = 0;
   for (let i = 0; i < n; i++) {
     for (const a of AXES) resolve(i, a);
     const b = i * 3;
+    checkExtent(members[i], i, lo, hi);
+    total += hi[b + ai(members[i].axis)] - lo[b + ai(members[i].axis)];
+    if (total > LIMITS.totalLength_mm) {
+      throw new InputError('members', `members: together more than ${LIMITS.totalLength_mm / 1e6} km of profile; split the frame`);
+    }
     out.push({
       index: i,
       member: members[i],
@@ -123,4 +130,20 @@ export function resolveMembers(
     });
   }
   return out;
+}
+
+/**
+ * Each offset is bounded by the schema, but chains of datums and member faces add them up; past these bounds a
+ * document is refused rather than worked on (the spatial hash would otherwise walk millions of cells).
+ */
+function checkExtent(m: Member, i: number, lo: Float64Array, hi: Float64Array): void {
+  for (const a of AXES) {
+    const k = i * 3 + ai(a);
+    if (!(Math.abs(lo[k]) <= LIMITS.extent_mm && Math.abs(hi[k]) <= LIMITS.extent_mm)) {
+      throw new InputError(`members[${i}]`, `members[${i}]: member "${m.id}" lies more than ${LIMITS.extent_mm / 1000} m from the origin on ${a}`);
+    }
+    if (!(hi[k] - lo[k] <= LIMITS.length_mm)) {
+      throw new InputError(`members[${i}]`, `members[${i}]: member "${m.id}" is more than ${LIMITS.length_mm / 1000} m long or wide on ${a}`);
+    }
+  }
 }

@@ -1,12 +1,13 @@
 import { z } from 'zod';
 import { axisSchema } from './axis';
+import { LIMITS, lengthMm } from '../limits';
 import { datumRefSchema, idSchema, nameSchema } from './ids';
 
 /** `factor × module size`: lets a datum follow a module ("cooler width + 2 × 5 mm clearance"). */
 export const sizeTermSchema = z.strictObject({
   module: idSchema,
   size: z.enum(['w', 'd', 'h']),
-  factor: z.number().default(1),
+  factor: z.number().min(-100, 'must be at least -100').max(100, 'must be at most 100').default(1),
 });
 export type SizeTerm = z.output<typeof sizeTermSchema>;
 
@@ -20,8 +21,8 @@ export const datumSchema = z.strictObject({
   name: nameSchema.optional(),
   axis: axisSchema,
   from: datumRefSchema.optional(),
-  offset_mm: z.number().default(0),
-  plus: z.array(sizeTermSchema).default([]),
+  offset_mm: lengthMm().default(0),
+  plus: z.array(sizeTermSchema).max(LIMITS.listItems, `at most ${LIMITS.listItems} terms`).default([]),
 });
 export type Datum = z.output<typeof datumSchema>;
 export type DatumInput = z.input<typeof datumSchema>;

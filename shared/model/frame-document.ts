@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS } from '../limits';
 import { datumSchema } from './datum';
 import { nameSchema } from './ids';
 import { jointSettingSchema } from './joint';
@@ -12,6 +13,8 @@ import { displayUnitsSchema, settingsSchema } from './settings';
 /** The document version this build writes; older documents are upgraded on reading (see upgrades/). */
 export const CURRENT_SCHEMA_VERSION = 1;
 
+const list = <T extends z.ZodType>(item: T, max: number, what: string) => z.array(item).max(max, `at most ${max} ${what}`).default([]);
+
 /**
  * A frame: flat lists of typed records with ids. All lengths in millimetres, masses in kilograms. Positions are
  * references (datums, bay edges, member faces), so swapping or resizing modules re-lays the frame without
@@ -23,13 +26,13 @@ export const frameDocumentSchema = z.strictObject({
   name: nameSchema.default(''),
   units: displayUnitsSchema.prefault({}),
   settings: settingsSchema.prefault({}),
-  profiles: z.array(profileOverrideSchema).default([]),
-  datums: z.array(datumSchema).default([]),
-  members: z.array(memberSchema).default([]),
-  modules: z.array(moduleSchema).default([]),
-  runs: z.array(runSchema).default([]),
-  joinMethods: z.array(joinMethodSchema).default([]),
-  joints: z.array(jointSettingSchema).default([]),
+  profiles: list(profileOverrideSchema, LIMITS.profiles, 'profiles'),
+  datums: list(datumSchema, LIMITS.datums, 'datums'),
+  members: list(memberSchema, LIMITS.members, 'members'),
+  modules: list(moduleSchema, LIMITS.modules, 'modules'),
+  runs: list(runSchema, LIMITS.runs, 'runs'),
+  joinMethods: list(joinMethodSchema, LIMITS.joinMethods, 'join methods'),
+  joints: list(jointSettingSchema, LIMITS.joints, 'joint settings'),
 });
 export type FrameDocument = z.output<typeof frameDocumentSchema>;
 /** What a caller may write: defaults filled in on parsing. */

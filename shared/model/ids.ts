@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storable } from '../limits';
 
 /**
  * Record ids: letters, digits, `_` and `-`. Dots are reserved for the datums a run generates (`run1.u0`,
@@ -17,4 +18,4 @@ export const datumRefSchema = z
   .max(100, 'must be at most 100 characters')
   .regex(/^[A-Za-z0-9][A-Za-z0-9_.-]*$/, 'must be a datum id');
 
-export const nameSchema = z.string().max(120, 'must be at most 120 characters');
+export const nameSchema = storable(z.string().max(120, 'must be at most 120 characters'));

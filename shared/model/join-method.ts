@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS, lengthMm } from '../limits';
 import { idSchema, nameSchema } from './ids';
 
 /** Join methods every frame has; a document's own methods must use other ids. */
@@ -22,13 +23,14 @@ export const joinMethodSchema = z.strictObject({
     .array(
       z.strictObject({
         name: nameSchema.min(1, 'must not be empty'),
-        qty: z.number().int('must be a whole number').nonnegative('must not be negative').default(1),
-        mass_g: z.number().nonnegative('must not be negative').optional(),
+        qty: z.number().int('must be a whole number').nonnegative('must not be negative').max(100, 'must be at most 100').default(1),
+        mass_g: z.number().nonnegative('must not be negative').max(1e6, 'must be at most 1000000 g').optional(),
       }),
     )
+    .max(LIMITS.listItems, `at most ${LIMITS.listItems} parts`)
     .default([]),
-  fastenersPerMember: z.number().int('must be a whole number').nonnegative('must not be negative').default(0),
-  clamp_mm: z.number().nonnegative('must not be negative').default(0),
+  fastenersPerMember: z.number().int('must be a whole number').nonnegative('must not be negative').max(100, 'must be at most 100').default(0),
+  clamp_mm: lengthMm().nonnegative('must not be negative').default(0),
   endTap: z.boolean().default(false),
   accessHole: z.boolean().default(false),
 });

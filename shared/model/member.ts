@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { lengthMm, storable } from '../limits';
 import { axisSchema } from './axis';
 import { idSchema, nameSchema } from './ids';
 import { placeSchema, positionSchema } from './position';
@@ -10,7 +11,7 @@ import { placeSchema, positionSchema } from './position';
  */
 export const memberEndSchema = positionSchema.safeExtend({
   join: idSchema.optional(),
-  allowance_mm: z.number().optional(),
+  allowance_mm: lengthMm().optional(),
 });
 export type MemberEnd = z.output<typeof memberEndSchema>;
 
@@ -30,12 +31,12 @@ export const memberSchema = z
     id: idSchema,
     name: nameSchema.optional(),
     role: memberRoleSchema.optional(),
-    profile: z.string().min(1, 'must name a profile').max(64),
+    profile: storable(z.string().min(1, 'must name a profile').max(64)),
     axis: axisSchema,
     rotation_deg: z.union([z.literal(0), z.literal(90), z.literal(180), z.literal(270)]).default(0),
     start: memberEndSchema,
     end: memberEndSchema.optional(),
-    length_mm: z.number().positive('must be more than 0').optional(),
+    length_mm: lengthMm().positive('must be more than 0').optional(),
     place: placeSchema,
     mark: z.string().regex(/^[A-Z]{1,3}$/, 'must be capital letters, e.g. "A" or "AB"').optional(),
   })

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS, lengthMm } from '../limits';
 import { idSchema, nameSchema } from './ids';
 import { placeSchema } from './position';
 
@@ -29,10 +30,12 @@ export const DEFAULT_MOUNT_CLAMP_MM = 3;
  */
 export const DEFAULT_SIDE_GAP_MM = 15;
 
+const mass = () => z.number().nonnegative('must not be negative').max(LIMITS.mass_kg, `must be at most ${LIMITS.mass_kg} kg`);
+
 const sizeSchema = z.strictObject({
-  w_mm: z.number().positive('must be more than 0'),
-  d_mm: z.number().positive('must be more than 0'),
-  h_mm: z.number().positive('must be more than 0'),
+  w_mm: lengthMm().positive('must be more than 0'),
+  d_mm: lengthMm().positive('must be more than 0'),
+  h_mm: lengthMm().positive('must be more than 0'),
 });
 
 /** Most alternatives one module may carry (a bound on input). */
@@ -64,19 +67,19 @@ export const moduleSchema = z
     name: nameSchema.optional(),
     kind: moduleKindSchema,
     size: sizeSchema,
-    mass_kg: z.number().nonnegative('must not be negative'),
-    contents_kg: z.number().nonnegative('must not be negative').default(0),
-    litres: z.number().nonnegative('must not be negative').optional(),
+    mass_kg: mass(),
+    contents_kg: mass().default(0),
+    litres: z.number().nonnegative('must not be negative').max(LIMITS.mass_kg, `must be at most ${LIMITS.mass_kg} L`).optional(),
     bearing: bearingSchema,
     place: placeSchema,
-    bearsOn: z.array(idSchema).optional(),
+    bearsOn: z.array(idSchema).max(LIMITS.listItems, `at most ${LIMITS.listItems} members`).optional(),
     mounting: z
       .strictObject({
-        points: z.number().int('must be a whole number').nonnegative('must not be negative').optional(),
-        clamp_mm: z.number().nonnegative('must not be negative').optional(),
+        points: z.number().int('must be a whole number').nonnegative('must not be negative').max(100, 'must be at most 100').optional(),
+        clamp_mm: lengthMm().nonnegative('must not be negative').optional(),
       })
       .optional(),
-    sideGap_mm: z.number().nonnegative('must not be negative').optional(),
+    sideGap_mm: lengthMm().nonnegative('must not be negative').optional(),
     options: z.array(moduleOptionSchema).max(MAX_OPTIONS, `at most ${MAX_OPTIONS} options`).optional(),
   })
   .superRefine((m, ctx) => {

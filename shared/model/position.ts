@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { lengthMm } from '../limits';
 import { datumRefSchema, idSchema } from './ids';
 
 /** Which face of the thing being placed sits at the position: its low face, its centre or its high face. */
@@ -15,7 +16,7 @@ export const positionSchema = z
     datum: datumRefSchema.optional(),
     member: idSchema.optional(),
     face: z.enum(['min', 'max']).optional(),
-    offset_mm: z.number().default(0),
+    offset_mm: lengthMm().default(0),
     align: alignSchema.optional(),
   })
   .superRefine((p, ctx) => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { axisSchema } from './axis';
+import { LIMITS, lengthMm } from '../limits';
 import { idSchema, nameSchema } from './ids';
 import { positionSchema } from './position';
 
@@ -18,8 +19,8 @@ export const baySchema = z
     id: idSchema,
     name: nameSchema.optional(),
     module: idSchema.optional(),
-    width_mm: z.number().positive('must be more than 0').optional(),
-    clearance_mm: z.number().nonnegative('must not be negative').optional(),
+    width_mm: lengthMm().positive('must be more than 0').optional(),
+    clearance_mm: lengthMm().nonnegative('must not be negative').optional(),
     stack: z.array(idSchema).max(MAX_STACK, `a bay stacks at most ${MAX_STACK} modules`).optional(),
   })
   .superRefine((b, ctx) => {
@@ -42,9 +43,9 @@ export const runSchema = z.strictObject({
   name: nameSchema.optional(),
   axis: axisSchema.default('x'),
   start: positionSchema.prefault({}),
-  upright_mm: z.number().nonnegative('must not be negative'),
-  clearance_mm: z.number().nonnegative('must not be negative').default(0),
-  bays: z.array(baySchema).min(1, 'a run needs at least one bay'),
+  upright_mm: lengthMm().nonnegative('must not be negative'),
+  clearance_mm: lengthMm().nonnegative('must not be negative').default(0),
+  bays: z.array(baySchema).min(1, 'a run needs at least one bay').max(LIMITS.baysPerRun, `at most ${LIMITS.baysPerRun} bays`),
 });
 export type Run = z.output<typeof runSchema>;
 export type RunInput = z.input<typeof runSchema>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ALLOY_IDS, type AlloyId } from '../catalog/alloys';
+import { storable } from '../limits';
 
 /** ISO 2768-1 general tolerance classes: fine, medium, coarse, very coarse. */
 export const toleranceClassSchema = z.enum(['f', 'm', 'c', 'v']);
@@ -41,7 +42,7 @@ export const settingsSchema = z.strictObject({
   sparesPct: z.number().min(0, 'must not be negative').max(100, 'must be at most 100').default(10),
   alloy: z.enum(ALLOY_IDS as [AlloyId, ...AlloyId[]]).optional(),
   tNut: z.enum(['slide-in', 'drop-in']).default('slide-in'),
-  defaultJoin: z.string().min(1).max(64).default('corner-bracket'),
+  defaultJoin: storable(z.string().min(1).max(64)).default('corner-bracket'),
 });
 export type FrameSettings = z.output<typeof settingsSchema>;
 

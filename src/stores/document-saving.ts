@@ -8,6 +8,8 @@ export type SaveState = 'saved' | 'pending' | 'saving' | 'error' | 'conflict';
 type Deps = {
   save: (frameId: string, baseVersion: number, document: FrameDocument) => Promise<SaveFrameDocumentResponse>;
   current: () => { frameId: string; doc: FrameDocument } | null;
+  /** Called with the refused draft on a 409, so it can outlive the page. */
+  onConflict?: (frameId: string, baseVersion: number, doc: FrameDocument) => void;
 };
 
 /** Quiet time after the last edit before saving (ms): a burst of edits goes as one save. */
@@ -82,6 +84,7 @@ export function useDocumentSaving(deps: Deps) {
         state.value = dirtyNow() ? 'pending' : 'saved';
       } catch (e) {
         if (isApiError(e) && e.status === 409 && e.current) {
+          deps.onConflict?.(cur.frameId, baseVersion.value, sent);
           conflict.value = e.current;
           state.value = 'conflict';
           error.value = null;
@@ -131,10 +134,18 @@ export function useDocumentSaving(deps: Deps) {
     state.value = dirtyNow() ? 'pending' : 'saved';
   }
 
+  /** Shows a conflict again (a draft kept from before a reload): saving waits until the builder chooses. */
+  function restoreConflict(current: VersionConflictCurrent): void {
+    if (timer) clearTimeout(timer);
+    timer = null;
+    conflict.value = current;
+    state.value = 'conflict';
+  }
+
   function markSaved(doc: FrameDocument | null): void {
     savedDoc.value = doc;
     state.value = 'saved';
   }
 
-  return reactive({ baseVersion, state, error, conflict, lastSavedAt, dirty, reset, schedule, saveNow, flush, adoptVersion, markSaved });
+  return reactive({ baseVersion, state, error, conflict, lastSavedAt, dirty, reset, schedule, saveNow, flush, adoptVersion, restoreConflict, markSaved });
 }

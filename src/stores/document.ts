@@ -12,6 +12,7 @@ import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
 import { useApi } from '@/api';
 import { createReportClient, defaultReportPort, type ReportAnswer, type ReportFailure } from '@/workers/report-client';
+import { dropDraft, keepDraft, loadDraft } from './conflict-drafts';
 import { useDocumentSaving } from './document-saving';
 import { useNoticesStore } from './notices';
 
@@ -71,6 +72,11 @@ export const useDocumentStore = defineStore('document', () => {
   const saving = useDocumentSaving({
     save: (id, baseVersion, document) => api.frames.saveDocument(id, { baseVersion, document: document as unknown as Record<string, unknown> }),
     current: () => (frameId.value && doc.value ? { frameId: frameId.value, doc: doc.value } : null),
+    onConflict: (id, baseVersion, document) => {
+      if (!keepDraft({ frameId: id, baseVersion, document, keptAt: new Date().toISOString() })) {
+        notices.notify('This browser could not keep your unsaved version; download it from the dialog to be safe', 'warning');
+      }
+    },
   });
 
   function onReport(a: ReportAnswer): void {
@@ -127,6 +133,18 @@ export const useDocumentStore = defineStore('document', () => {
       readOnly.value = true;
     }
     saving.reset(frame.version, doc.value);
+    // A draft that lost a save race before the page was left: bring it back with the choice still open.
+    const draft = canWrite && doc.value ? loadDraft(frame.id) : null;
+    if (draft) {
+      try {
+        const mine = parseFrameDocument(draft.document);
+        scene.value = sceneFromDocument(mine, null);
+        doc.value = mine;
+        saving.restoreConflict({ version: frame.version, document: frame.document, savedAt: frame.updatedAt, savedBy: frame.updatedBy });
+      } catch {
+        dropDraft(frame.id);
+      }
+    }
     revision.value++;
     if (doc.value) requestReport({ reset: true });
     else reports.cancel();
@@ -248,6 +266,7 @@ export const useDocumentStore = defineStore('document', () => {
       refusal.value = { label: 'Take their version', message: e instanceof Error ? e.message : String(e), field: null };
       return;
     }
+    if (frameId.value) dropDraft(frameId.value);
     saving.adoptVersion(current.version, theirs);
     const change = diffDocuments(doc.value, theirs, 'Take the saved version');
     if (!isEmptyChange(change) && commit(change, {})) {
@@ -260,6 +279,7 @@ export const useDocumentStore = defineStore('document', () => {
 
   /** Keep ours: save it on top of theirs (theirs stays in the saved versions). */
   function keepMine(current: VersionConflictCurrent): void {
+    if (frameId.value) dropDraft(frameId.value);
     saving.adoptVersion(current.version, null);
     saving.schedule(0);
   }

@@ -79,4 +79,22 @@ describe('two people save the same frame', () => {
     expect(saved.version).toBe(5);
     expect(saved.document.members).toHaveLength(doc.members.length);
   });
+
+  it('a reload while the choice is open brings it back with my version, kept by this browser', async () => {
+    await saveBehindTheEditor(page, frameId, 5, theirs);
+    await nudgeAnUpright();
+    await page.getByRole('heading', { name: 'Someone else saved this frame' }).waitFor();
+    await page.reload();
+    await page.getByRole('heading', { name: 'Someone else saved this frame' }).waitFor();
+    await expect.poll(() => statusText(page)).toContain(`${doc.members.length} members`);
+    await page.getByRole('button', { name: 'Keep mine' }).click();
+    await page.getByTestId('save-state').getByText('All changes saved').waitFor();
+    const saved = await serverFrame(page, frameId);
+    expect(saved.version).toBe(7);
+    expect(saved.document.members).toHaveLength(doc.members.length);
+    // Chosen: the draft is gone, a further reload opens the frame without the dialog.
+    await page.reload();
+    await expect.poll(() => statusText(page)).toContain(`${doc.members.length} members`);
+    expect(await page.getByRole('heading', { name: 'Someone else saved this frame' }).count()).toBe(0);
+  });
 });

@@ -85,7 +85,8 @@ export function sampleDocument(memberCount = 2, tag = 'a'): FrameDocumentJson {
       axis: 'x',
       start: { offset_mm: 0 },
       length_mm: 500 + i,
-      place: { z: { offset_mm: 100 * i } },
+      // Rows of 900 rails, stacked 100 mm apart, keep a big frame within the 100 m bound on every offset.
+      place: i < 900 ? { z: { offset_mm: 100 * i } } : { y: { offset_mm: 100 * Math.floor(i / 900) }, z: { offset_mm: 100 * (i % 900) } },
     })),
   }) as unknown as FrameDocumentJson;
 }

@@ -1,10 +1,11 @@
 import type { Express } from 'express';
 import type pg from 'pg';
 import type session from 'express-session';
-import { createApp } from '../../server/app';
+import { createApp, disposeApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createOrm, createSessionPool, type Orm } from '../../server/db';
 import { createSessionStore } from '../../server/http/session';
+import { WorkerPool, type WorkerPoolOptions } from '../../server/workers/pool';
 
 // One running app over the test database, built the way server/index.ts builds it.
 
@@ -14,6 +15,7 @@ export interface TestContext {
   config: Config;
   /** Unexpected errors the app reported (a test that provokes a 500 can look here). */
   loggedErrors: unknown[];
+  workers: WorkerPool;
   close(): Promise<void>;
 }
 
@@ -29,23 +31,27 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
   });
 }
 
-export async function createTestContext(overrides: Record<string, string> = {}): Promise<TestContext> {
+export async function createTestContext(overrides: Record<string, string> = {}, workerOptions?: WorkerPoolOptions): Promise<TestContext> {
   const config = testConfig(overrides);
   const orm = await createOrm(config);
   const pool: pg.Pool = createSessionPool(config);
   const store: session.Store = createSessionStore(pool, { pruneIntervalSeconds: false });
   const loggedErrors: unknown[] = [];
-  const app = createApp({ orm, config, sessionStore: store, logError: (_m, err) => loggedErrors.push(err) });
+  const workers = new WorkerPool(workerOptions);
+  const app = createApp({ orm, config, sessionStore: store, workers, logError: (_m, err) => loggedErrors.push(err) });
   let closed = false;
   return {
     app,
     orm,
     config,
     loggedErrors,
+    workers,
     async close() {
       if (closed) return;
       closed = true;
       (store as session.Store & { close?: () => void }).close?.();
+      await workers.close();
+      await disposeApp(app);
       await pool.end();
       await orm.close(true);
     },

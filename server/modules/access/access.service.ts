@@ -31,6 +31,16 @@ function check(role: Role, action: Action, what: string): void {
   throw new ForbiddenError();
 }
 
+/**
+ * For a record found first and authorised after (an order, a supplier): someone outside its workshop gets the
+ * very 404 a missing record gives, so the answer never tells whether the id exists.
+ */
+export function asNotFound<T>(what: string, check: Promise<T>): Promise<T> {
+  return check.catch((err: unknown) => {
+    throw err instanceof NotFoundError ? new NotFoundError(what) : err;
+  });
+}
+
 export async function authorizeWorkshop(em: EntityManager, userId: string, workshopId: string, action: Action): Promise<WorkshopRole> {
   const role = await roleIn(em, userId, workshopId);
   if (!role) throw new NotFoundError('Workshop');

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, attachmentParamsSchema, updateAttachmentRequestSchema, type AttachmentView } from '@shared/api/shop';
 import { can } from '@shared/api/roles';
 import { projectParamsSchema } from '@shared/api/projects';
@@ -42,6 +42,10 @@ function cleanName(name: string): string {
 
 export function attachmentsRouter(orm: Orm): Router {
   const router = Router();
+  const mayAttach = async (req: Request) => {
+    const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
+    await authorizeProject(orm.em, currentUserId(req), projectId, 'project.write');
+  };
 
   router.get('/projects/:projectId/attachments', async (req, res) => {
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
@@ -51,7 +55,7 @@ export function attachmentsRouter(orm: Orm): Router {
     res.json(rows.map(view));
   });
 
-  router.post('/projects/:projectId/attachments', singleFile('file', MAX_ATTACHMENT_BYTES), async (req, res) => {
+  router.post('/projects/:projectId/attachments', singleFile('file', MAX_ATTACHMENT_BYTES, mayAttach), async (req, res) => {
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
     const userId = currentUserId(req);
     const { project } = await authorizeProject(orm.em, userId, projectId, 'project.write');
@@ -99,7 +103,10 @@ export function attachmentsRouter(orm: Orm): Router {
     const { attachmentId } = parseInput(attachmentParamsSchema, req.params, 'params');
     const a = await orm.em.findOne(Attachment, { id: attachmentId });
     if (!a) throw new NotFoundError('Attachment');
-    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'project.write');
+    // One 404 whether the attachment is missing or in another workshop.
+    await authorizeProject(orm.em, currentUserId(req), a.project.id, 'project.write').catch((err: unknown) => {
+      throw err instanceof NotFoundError ? new NotFoundError('Attachment') : err;
+    });
     await orm.em.nativeDelete(Attachment, { id: a.id });
     res.status(204).end();
   });

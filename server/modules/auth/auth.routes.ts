@@ -17,6 +17,8 @@ import { parseInput } from '../../validate';
 import { createMailer } from '../../mail/mailer';
 import { currentUserId } from '../../http/current-user';
 import { clientProjectsOf, createUser, findUser, membershipsOf, toUserDto, verifyCredentials } from './auth.service';
+import { refuseCommonPassword } from './common-passwords';
+import { forget, recordFailure, refuseIfBlocked, type ThrottleRule } from './throttle';
 import { changePassword, confirmPasswordReset, requestPasswordReset } from './password.service';
 
 function emailKey(req: Request): string {
@@ -39,29 +41,20 @@ export { startSignedInSession };
 export function authRouter(orm: Orm, config: Config): Router {
   const router = Router();
 
+  // Failed sign-ins per address and e-mail (growing delays past the allowance), and per address across every
+  // e-mail (a larger allowance, so a shared office address is not slowed by one mistyped password). Counted in
+  // PostgreSQL: every server sees them and a restart keeps them. A successful sign-in forgets its pair's count.
+  const { max, windowMs } = config.signInRateLimit;
+  const pairRule: ThrottleRule = { free: max, windowMs, firstDelayS: 30 };
+  const addressRule: ThrottleRule = { free: max * 3, windowMs, firstDelayS: 30 };
+  const signUpRule: ThrottleRule = { free: config.signUpRateLimit.max, windowMs: config.signUpRateLimit.windowMs, firstDelayS: 60 };
+  const policy = (res: { set(name: string, value: string): unknown }, rule: ThrottleRule) =>
+    res.set('RateLimit-Policy', `${rule.free};w=${Math.round(rule.windowMs / 1000)}`);
+  const address = (req: Request) => ipKeyGenerator(req.ip ?? '');
+
   const rateLimited = (message: string) => (_req: Request, _res: unknown, next: (err: unknown) => void) =>
     next(new HttpError('rate_limited', message));
-
-  // Failed attempts per address and e-mail; a successful sign-in does not count against the limit.
-  const signInLimiter = rateLimit({
-    windowMs: config.signInRateLimit.windowMs,
-    limit: config.signInRateLimit.max,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    skipSuccessfulRequests: true,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${emailKey(req)}`,
-    handler: rateLimited('Too many sign-in attempts; wait a few minutes and try again'),
-  });
-  const signUpLimiter = rateLimit({
-    windowMs: config.signUpRateLimit.windowMs,
-    limit: config.signUpRateLimit.max,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    keyGenerator: (req) => ipKeyGenerator(req.ip ?? ''),
-    handler: rateLimited('Too many accounts created from this address; try again later'),
-  });
-
-  // Per address and e-mail, like sign-in, so nobody fills someone's mailbox with reset links.
+  // Per address and e-mail, so nobody fills someone's mailbox with reset links.
   const resetLimiter = rateLimit({
     windowMs: config.signInRateLimit.windowMs,
     limit: config.signInRateLimit.max,
@@ -83,6 +76,7 @@ export function authRouter(orm: Orm, config: Config): Router {
 
   router.post('/auth/password-reset/confirm', async (req, res) => {
     const { token, password } = parseInput(passwordResetConfirmSchema, req.body);
+    refuseCommonPassword(password, []);
     await confirmPasswordReset(orm.em, config, token, password);
     res.status(204).end();
   });
@@ -90,6 +84,7 @@ export function authRouter(orm: Orm, config: Config): Router {
   router.post('/auth/password', async (req, res) => {
     const userId = currentUserId(req);
     const { currentPassword, password } = parseInput(changePasswordRequestSchema, req.body);
+    refuseCommonPassword(password, []);
     await changePassword(orm.em, config, userId, req.sessionID, currentPassword, password);
     const csrfToken = await startSignedInSession(req, userId);
     res.json({ csrfToken });
@@ -101,17 +96,35 @@ export function authRouter(orm: Orm, config: Config): Router {
     res.json({ token } satisfies CsrfResponse);
   });
 
-  router.post('/auth/signup', signUpLimiter, async (req, res) => {
+  router.post('/auth/signup', async (req, res) => {
+    const em = orm.em;
+    const key = `signup:${address(req)}`;
+    policy(res, signUpRule);
+    await refuseIfBlocked(em, [key], 'Too many accounts created from this address; try again later');
     const input = parseInput(signUpRequestSchema, req.body);
+    refuseCommonPassword(input.password, [input.email, input.name]);
+    // Every attempt counts here, not only failures: accounts are what is being limited.
+    await recordFailure(em, key, signUpRule);
     const user = await createUser(orm.em, input, config.bcryptCost);
     const csrfToken = await startSignedInSession(req, user.id);
     res.status(201).json({ user: toUserDto(user), csrfToken } satisfies AuthResponse);
   });
 
-  router.post('/auth/signin', signInLimiter, async (req, res) => {
+  router.post('/auth/signin', async (req, res) => {
+    const em = orm.em;
+    // Parsed first (cheap): the keys below hold only an e-mail the database can store.
     const input = parseInput(signInRequestSchema, req.body);
-    const user = await verifyCredentials(orm.em, input.email, input.password);
-    if (!user) throw new HttpError('invalid_credentials', 'Wrong e-mail or password');
+    const pair = `pair:${address(req)}|${input.email}`;
+    const ip = `ip:${address(req)}`;
+    policy(res, pairRule);
+    await refuseIfBlocked(em, [pair, ip], 'Too many sign-in attempts; wait and try again');
+    const user = await verifyCredentials(em, input.email, input.password, config.bcryptCost);
+    if (!user) {
+      await recordFailure(em, pair, pairRule);
+      await recordFailure(em, ip, addressRule);
+      throw new HttpError('invalid_credentials', 'Wrong e-mail or password');
+    }
+    await forget(em, pair);
     const csrfToken = await startSignedInSession(req, user.id);
     res.json({ user: toUserDto(user), csrfToken } satisfies AuthResponse);
   });

@@ -6,8 +6,14 @@ import { ConflictError } from '../../errors';
 import { User, type UserEntity } from '../users/user.entity';
 import { Membership } from '../workshops/membership.entity';
 
-// Compared against when the e-mail is unknown, so a wrong e-mail takes as long as a wrong password.
-const UNKNOWN_USER_HASH = bcrypt.hashSync('no account has this password', 10);
+// Compared against when the e-mail is unknown, so a wrong e-mail takes as long as a wrong password: made at the
+// cost real passwords are hashed with (bcrypt's work doubles with each step of cost), once per cost.
+const unknownUserHashes = new Map<number, Promise<string>>();
+function unknownUserHash(cost: number): Promise<string> {
+  let h = unknownUserHashes.get(cost);
+  if (!h) unknownUserHashes.set(cost, (h = bcrypt.hash('no account has this password', cost)));
+  return h;
+}
 
 export function toUserDto(u: Pick<UserEntity, 'id' | 'email' | 'name'>): UserDto {
   return { id: u.id, email: u.email, name: u.name };
@@ -36,9 +42,9 @@ export async function createUser(
 }
 
 /** The user when the password matches, otherwise null (never says which part was wrong). */
-export async function verifyCredentials(em: EntityManager, email: string, password: string): Promise<UserEntity | null> {
+export async function verifyCredentials(em: EntityManager, email: string, password: string, bcryptCost: number): Promise<UserEntity | null> {
   const user = await em.findOne(User, { email });
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? UNKNOWN_USER_HASH);
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? (await unknownUserHash(bcryptCost)));
   return user && ok ? user : null;
 }
 

@@ -2,30 +2,24 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { frameIdParamsSchema, paperSchema, startCuttingSchema, tickRequestSchema } from '@shared/api/shop';
 import { idSchema } from '@shared/api/common';
-import { cutListCsv, orderListCsv } from '@shared/shop/csv-export';
-import { drillSheet } from '@shared/shop/drill-list';
-import { shopCutList } from '@shared/shop/from-report';
-import { partLabels } from '@shared/shop/labels';
-import { orderList } from '@shared/shop/order-list';
-import { pickSheet } from '@shared/shop/pick-list';
-import { sawSheet } from '@shared/shop/saw-list';
 import type { Orm } from '../../db';
 import { ForbiddenError } from '../../errors';
 import { currentUserId } from '../../http/current-user';
-import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../../pdf';
+import { sheetPlanPdf } from '../../pdf';
 import { frameSheetPlans } from '../orders/sheet-plans';
 import { parseInput } from '../../validate';
+import { clientGone, type WorkerPool } from '../../workers/pool';
+import { needsPlan, SHOP_DOCS, type ShopDocumentOutput } from '../../workers/shop-document.task';
 import { authorizeFrame } from '../access/access.service';
-import { frameReport, planFrame, shelfOf, shopMeta, supplierFor, today } from '../orders/frame-shop.service';
+import { frameReport, offersOf, shelfOf, shopMeta, supplierFor, today } from '../orders/frame-shop.service';
 import { sendFile } from '../orders/orders.routes';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
+import { Workshop } from '../workshops/workshop.entity';
 import { cuttingState, latestSession, latestSessionKey, startSession, tick, untick } from './cutting.service';
 import { createShopCache, type ShopFile } from './shop-cache';
 import { frameHead, type FrameFacts } from '../frames/frame-read';
 import type { SupplierEntity } from '../suppliers/supplier.entity';
 import { can } from '@shared/api/roles';
-
-const DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv', 'sheet-plan.pdf'] as const;
 
 const docQuerySchema = z.object({
   paper: paperSchema.default('A4'),
@@ -36,7 +30,7 @@ const docQuerySchema = z.object({
   minOffcut_mm: z.coerce.number().min(0).max(3000).optional(),
 });
 
-export function cuttingRouter(orm: Orm): Router {
+export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
   const router = Router();
 
   router.get('/frames/:frameId/cutting', async (req, res) => {
@@ -86,7 +80,7 @@ export function cuttingRouter(orm: Orm): Router {
   const cache = createShopCache();
   router.get('/frames/:frameId/shop/:doc', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, { frameId: req.params.frameId }, 'params');
-    const doc = parseInput(z.object({ doc: z.enum(DOCS) }), { doc: req.params.doc }, 'params').doc;
+    const doc = parseInput(z.object({ doc: z.enum([...SHOP_DOCS, 'sheet-plan.pdf']) }), { doc: req.params.doc }, 'params').doc;
     const q = parseInput(docQuerySchema, req.query, 'query');
     const userId = currentUserId(req);
     const head = await frameHead(orm.em, userId, frameId, 'shop.read');
@@ -102,46 +96,54 @@ export function cuttingRouter(orm: Orm): Router {
       shelf,
       session,
     };
-    const made = await cache.file(head, settings, () => makeShopFile(userId, head, doc, q, supplier));
+    const made = await cache.file(head, settings, () => makeShopFile(userId, head, doc, q, supplier, clientGone(res)));
     sendFile(res, made.file.body, made.file.type, made.file.filename);
   });
 
   async function makeShopFile(
     userId: string,
     head: FrameFacts,
-    doc: (typeof DOCS)[number],
+    doc: (typeof SHOP_DOCS)[number] | 'sheet-plan.pdf',
     q: z.infer<typeof docQuerySchema>,
     supplierFound: SupplierEntity | null,
+    signal: ReturnType<typeof clientGone>,
   ): Promise<ShopFile> {
     const { frame } = await authorizeFrame(orm.em, userId, head.id, 'shop.read');
-    const report = cache.report(head, () => frameReport(frame));
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
-    const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
     const base = `${frame.name}-r${frame.version}`;
     const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
     if (doc === 'sheet-plan.pdf') {
+      const report = cache.report(head, () => frameReport(frame));
+      const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
       return file(await sheetPlanPdf(frameSheetPlans(report), meta), 'application/pdf', `${base}-sheet-plan.pdf`);
     }
+    const workshop = await orm.em.findOneOrFail(Workshop, { id: frame.project.workshop.id });
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
-    const needsPlan = (doc === 'saw-list.pdf' && !frozen) || doc === 'order-list.csv';
-    const supplier = needsPlan ? supplierFound : null;
-    const planned = needsPlan ? await planFrame(orm.em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS }) : null;
-    const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
-    switch (doc) {
-      case 'saw-list.pdf':
-        return file(await sawListPdf(sawSheet(cutList, frozen?.plans ?? planned!.plans, meta)), 'application/pdf', `${base}-saw-list.pdf`);
-      case 'drill-list.pdf':
-        return file(await drillListPdf(drillSheet(cutList, meta.units), meta), 'application/pdf', `${base}-drill-list.pdf`);
-      case 'pick-list.pdf':
-        return file(await pickListPdf(pickSheet(cutList), meta), 'application/pdf', `${base}-pick-list.pdf`);
-      case 'labels.pdf':
-        return file(await labelsPdf(partLabels(cutList, meta), meta), 'application/pdf', `${base}-labels.pdf`);
-      case 'cut-list.csv':
-        return file(cutListCsv(cutList, meta.units), 'text/csv; charset=utf-8', `${base}-cut-list.csv`);
-      case 'order-list.csv':
-        return file(orderListCsv(orderList(planned!.planned, supplier?.currency ?? 'EUR', { cutFee: Number(supplier?.cutFee ?? 0) })), 'text/csv; charset=utf-8', `${base}-order-list.csv`);
-    }
+    const planning = needsPlan(doc, frozen !== null);
+    const supplier = planning ? supplierFound : null;
+    const shelf = planning ? await shelfOf(orm.em, frame.project.workshop.id) : [];
+    // The report, the plan and the document itself are CPU work: a worker thread does them.
+    const out = await workers.run<ShopDocumentOutput>(
+      {
+        task: 'shopDocument',
+        input: {
+          doc,
+          document: frame.document,
+          meta: { project: frame.project.name, frame: frame.name, revision: frame.version, date: today(), workshop: workshop.name, units, paper: q.paper },
+          frozen,
+          offers: offersOf(supplier),
+          shelf,
+          settings,
+          timeLimitMs: PLAN_TIME_LIMIT_MS,
+          currency: supplier?.currency ?? 'EUR',
+          cutFee: Number(supplier?.cutFee ?? 0),
+        },
+      },
+      signal,
+    );
+    const body = typeof out.body === 'string' ? out.body : Buffer.from(out.body.buffer, out.body.byteOffset, out.body.byteLength);
+    return file(body, out.contentType, `${base}-${out.suffix}`);
   }
 
   return router;

@@ -6,7 +6,7 @@ import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { createMailer } from '../../mail/mailer';
 import { parseInput } from '../../validate';
-import { authorizeWorkshop } from '../access/access.service';
+import { asNotFound, authorizeWorkshop } from '../access/access.service';
 import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv, orderPdf, sendOrder, toOrderDetail } from './orders.service';
 
 /** Sends a generated file as a download with a safe file name. */
@@ -23,7 +23,7 @@ export function ordersRouter(orm: Orm, config: Config): Router {
 
   const orderWithRole = async (userId: string, orderId: string, action: 'read' | 'project.write') => {
     const o = await findOrder(orm.em, orderId);
-    await authorizeWorkshop(orm.em, userId, o.workshop.id, action);
+    await asNotFound('Order', authorizeWorkshop(orm.em, userId, o.workshop.id, action));
     return o;
   };
 

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { offcutParamsSchema } from '@shared/api/shop';
 import { workshopParamsSchema } from '@shared/api/workshops';
 import type { Orm } from '../../db';
@@ -13,6 +13,10 @@ const MAX_CSV_BYTES = 1024 * 1024;
 
 export function stockRouter(orm: Orm): Router {
   const router = Router();
+  const mayImport = (req: Request) => {
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    return authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'project.write');
+  };
 
   router.get('/workshops/:workshopId/offcuts', async (req, res) => {
     const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
@@ -20,7 +24,7 @@ export function stockRouter(orm: Orm): Router {
     res.json(await listOffcuts(orm.em, workshopId));
   });
 
-  router.post('/workshops/:workshopId/offcuts/import', singleFile('file', MAX_CSV_BYTES), async (req, res) => {
+  router.post('/workshops/:workshopId/offcuts/import', singleFile('file', MAX_CSV_BYTES, mayImport), async (req, res) => {
     const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
     await authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'project.write');
     res.json(await importOffcuts(orm.em, workshopId, uploadedText(req.file)));
@@ -39,7 +43,7 @@ export function stockRouter(orm: Orm): Router {
     res.json(await listCustomProfiles(orm.em, workshopId));
   });
 
-  router.post('/workshops/:workshopId/custom-profiles/import', singleFile('file', MAX_CSV_BYTES), async (req, res) => {
+  router.post('/workshops/:workshopId/custom-profiles/import', singleFile('file', MAX_CSV_BYTES, mayImport), async (req, res) => {
     const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
     await authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'project.write');
     res.json(await importCustomProfiles(orm.em, workshopId, uploadedText(req.file)));

@@ -4,7 +4,7 @@ import { workshopParamsSchema } from '@shared/api/workshops';
 import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
-import { authorizeWorkshop } from '../access/access.service';
+import { asNotFound, authorizeWorkshop } from '../access/access.service';
 import { createSupplier, deleteSupplier, findSupplier, listSuppliers, updateSupplier } from './suppliers.service';
 
 export function suppliersRouter(orm: Orm): Router {
@@ -26,7 +26,7 @@ export function suppliersRouter(orm: Orm): Router {
     const { supplierId } = parseInput(supplierParamsSchema, req.params, 'params');
     const userId = currentUserId(req);
     const s = await findSupplier(orm.em, supplierId);
-    await authorizeWorkshop(orm.em, userId, s.workshop.id, 'project.write');
+    await asNotFound('Supplier', authorizeWorkshop(orm.em, userId, s.workshop.id, 'project.write'));
     res.json(await updateSupplier(orm.em, s, parseInput(supplierPatchSchema, req.body)));
   });
 
@@ -34,7 +34,7 @@ export function suppliersRouter(orm: Orm): Router {
     const { supplierId } = parseInput(supplierParamsSchema, req.params, 'params');
     const userId = currentUserId(req);
     const s = await findSupplier(orm.em, supplierId);
-    await authorizeWorkshop(orm.em, userId, s.workshop.id, 'project.write');
+    await asNotFound('Supplier', authorizeWorkshop(orm.em, userId, s.workshop.id, 'project.write'));
     await deleteSupplier(orm.em, s);
     res.status(204).end();
   });

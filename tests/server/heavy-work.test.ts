@@ -1,0 +1,58 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiErrorSchema } from '@shared/api/errors';
+import { signedIn, type ApiClient } from '../support/api-client';
+import { makeUser } from '../support/factories';
+import { createTestContext, truncateAll, type TestContext } from '../support/test-app';
+
+// Plans run in a pool of worker threads behind a bounded queue. Here the pool is one thread and a queue of one,
+// so the limits show with three requests.
+
+let ctx: TestContext;
+let user: ApiClient;
+
+beforeAll(async () => {
+  ctx = await createTestContext({}, { threads: 1, queue: 1 });
+  await truncateAll(ctx.orm);
+  user = await signedIn(ctx.app, await makeUser(ctx.orm));
+});
+afterAll(() => ctx.close());
+
+// Many distinct lengths on one bar length, so the search does not prove optimality early and uses its limit.
+const slowJob = () => ({
+  kerf: 3,
+  stock: [{ length: 6000 }],
+  parts: Array.from({ length: 120 }, (_, i) => ({ length: 1000 + ((i * 7919) % 1900), qty: 5 })),
+});
+
+describe('POST /api/plan/cut under load', () => {
+  it('a quantity of 1e9 is refused with 400 naming the parts, before any planning', async () => {
+    const res = await user.post('/api/plan/cut', { job: { stock: [{ length: 6000 }], parts: [{ length: 500, qty: 1e9 }] } });
+    expect(res.status).toBe(400);
+    expect(apiErrorSchema.parse(res.body).error.fields).toHaveProperty(['job.parts']);
+  });
+
+  it('past the queue → 503 with Retry-After; the running and the queued plan still finish', async () => {
+    const first = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 300));
+    const second = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 100));
+    const third = await user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 });
+    expect(third.status).toBe(503);
+    expect(apiErrorSchema.parse(third.body).error.code).toBe('unavailable');
+    expect(Number(third.headers['retry-after'])).toBeGreaterThan(0);
+    expect((await first).status).toBe(200);
+    expect((await second).status).toBe(200);
+  });
+
+  it('a client that leaves ends its plan: its worker thread is ended and replaced, the next caller is served', async () => {
+    const before = ctx.workers.stats;
+    await user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 5000 }).timeout(600).catch(() => undefined);
+    for (let i = 0; i < 50 && ctx.workers.stats.cancelled === before.cancelled; i++) await new Promise((r) => setTimeout(r, 100));
+    expect(ctx.workers.stats.cancelled).toBe(before.cancelled + 1);
+    const next = await user.post('/api/plan/cut', { job: { stock: [{ length: 6000 }], parts: [{ length: 500, qty: 3 }] }, timeLimitMs: 0 });
+    expect(next.status).toBe(200);
+    // piscina terminates the thread running an aborted task: none of the threads from before is left.
+    expect(ctx.workers.stats.threadIds.filter((id) => before.threadIds.includes(id))).toEqual([]);
+    expect(ctx.loggedErrors).toEqual([]);
+  });
+});
