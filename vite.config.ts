@@ -24,7 +24,14 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/shared/**/*.test.ts', 'tests/scripts/**/*.test.ts', 'tests/src/**/*.test.ts'], environment: 'node' },
+        test: {
+          name: 'unit',
+          include: ['tests/shared/**/*.test.ts', 'tests/scripts/**/*.test.ts', 'tests/src/**/*.test.ts'],
+          environment: 'node',
+          // Property tests run hundreds of random frames and the command-line tests start processes: on a busy
+          // machine they take longer than the default 5 s without being wrong.
+          testTimeout: 60000,
+        },
       },
       {
         extends: true,
