@@ -71,7 +71,8 @@ describe('swapping modules re-lays the frame', () => {
     // Undo: the bays, the upright and the cut list are as before.
     await page.locator('[data-view="front"]').focus();
     await page.keyboard.press('Control+z');
-    expect(await cutListRows(page)).toEqual(rowsBefore);
+    // The status still says "checked in" for a moment before the undone frame's report is asked for: poll.
+    await expect.poll(() => cutListRows(page)).toEqual(rowsBefore);
     await pickMember(page, 'galley-u2-f');
     expect(await fieldValue(page, 'part-position-x')).toBe(xBefore);
     await page.screenshot({ path: screenshotPath('editor-swap-undone.png') });
