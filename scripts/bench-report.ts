@@ -2,36 +2,12 @@
 // machine (the editor recomputes the whole report on every change). Bounded: at most RUNS runs or ~20 s.
 import { availableParallelism, loadavg } from 'node:os';
 import { computeReport } from '@shared/engine/report';
-import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
-import type { FrameDocument } from '@shared/model/frame-document';
+import { benchFrame } from './lib/bench-frame';
 import { quantile } from './lib/stats';
 
 const RUNS = 200;
 const WARM_UP = 20;
 const BUDGET_MS = 20_000;
-
-/** A long cabinet run: 50 bays alternating base modules and side-rail drawers, 10 members a bay (+4). */
-export function benchFrame(bays = 50): FrameDocument {
-  const list: CabinetBay[] = [];
-  for (let k = 0; k < bays; k++) {
-    const base = k % 2 === 0;
-    list.push({
-      id: `bay-${k}`,
-      clearance_mm: base ? 10 : 12.7,
-      module: {
-        id: `module-${k}`,
-        name: base ? `Cooler ${k}` : `Drawers ${k}`,
-        kind: base ? 'appliance' : 'drawer-stack',
-        bearing: base ? 'base' : 'side-rails',
-        size: { w_mm: 300 + ((k * 37) % 200), d_mm: 400, h_mm: base ? 420 : 300 },
-        mass_kg: base ? 15 : 8,
-        contents_kg: base ? 15 : 10,
-        raise_mm: base ? 0 : 100,
-      },
-    });
-  }
-  return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
-}
 
 function main(): void {
   const doc = benchFrame();

@@ -1,7 +1,7 @@
-import { parseArgs } from 'node:util';
 import { resolveProfile, sectionOf } from '@shared/catalog/profiles';
 import { beam, beamStress, type BeamLoad, type BeamSupport } from '@shared/engine/beam';
 import { parseForce, parseForcePerLength, parseLength } from '@shared/geometry/units';
+import { readFlags } from './flags';
 
 export type BeamOutput = {
   deflection_mm: number;
@@ -27,32 +27,9 @@ const SUPPORTS: BeamSupport[] = ['simple', 'fixed', 'cantilever'];
 
 /** `calc beam`: deflection, moment and stress of one profile over a single span. */
 export async function run(args: string[]): Promise<BeamOutput> {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args,
-      options: {
-        profile: { type: 'string' },
-        span: { type: 'string' },
-        load: { type: 'string' },
-        at: { type: 'string' },
-        udl: { type: 'string' },
-        support: { type: 'string' },
-        axis: { type: 'string' },
-      },
-      allowPositionals: false,
-      strict: true,
-    });
-  } catch (err) {
-    throw new Error(`${err instanceof Error ? err.message : String(err)}\n${USAGE}`);
-  }
-  const v = parsed.values;
-  const need = (name: string, value: string | undefined): string => {
-    if (value === undefined || value.trim() === '') throw new Error(`--${name}: missing\n${USAGE}`);
-    return value;
-  };
-  const profile = resolveProfile(need('profile', v.profile));
-  const span = parseLength(need('span', v.span), '--span');
+  const { values: v, need } = readFlags(args, ['profile', 'span', 'load', 'at', 'udl', 'support', 'axis'], USAGE);
+  const profile = resolveProfile(need('profile'));
+  const span = parseLength(need('span'), '--span');
   if (!(span > 0)) throw new Error(`--span: must be longer than zero (got "${v.span}")`);
 
   const support = (v.support ?? 'simple') as BeamSupport;

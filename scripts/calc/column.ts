@@ -1,8 +1,8 @@
-import { parseArgs } from 'node:util';
 import { resolveProfile, sectionOf } from '@shared/catalog/profiles';
 import { principalAxes } from '@shared/geometry/polygon';
 import { parseForce, parseLength } from '@shared/geometry/units';
 import { bucklingClassOf, checkColumn, COLUMN_SOURCE } from '@shared/engine/column';
+import { readFlags } from './flags';
 
 export type ColumnOutput = {
   profile: string;
@@ -24,26 +24,11 @@ const USAGE = [
 
 /** `calc column`: an upright as a column, Euler load about its weak axis and the EN 1999-1-1 buckling resistance. */
 export async function run(args: string[]): Promise<ColumnOutput> {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args,
-      options: { profile: { type: 'string' }, length: { type: 'string' }, load: { type: 'string' }, k: { type: 'string' } },
-      allowPositionals: false,
-      strict: true,
-    });
-  } catch (err) {
-    throw new Error(`${err instanceof Error ? err.message : String(err)}\n${USAGE}`);
-  }
-  const v = parsed.values;
-  const need = (name: string, value: string | undefined): string => {
-    if (value === undefined || value.trim() === '') throw new Error(`--${name}: missing\n${USAGE}`);
-    return value;
-  };
-  const profile = resolveProfile(need('profile', v.profile));
-  const length = parseLength(need('length', v.length), '--length');
+  const { values: v, need } = readFlags(args, ['profile', 'length', 'load', 'k'], USAGE);
+  const profile = resolveProfile(need('profile'));
+  const length = parseLength(need('length'), '--length');
   if (!(length > 0 && length <= 100_000)) throw new Error(`--length: must be more than zero and at most 100 m (got "${v.length}")`);
-  const load = parseForce(need('load', v.load), '--load');
+  const load = parseForce(need('load'), '--load');
   if (!(load >= 0 && load <= 1e7)) throw new Error(`--load: must be a compressive load from 0 to 10 MN (got "${v.load}")`);
   const K = v.k === undefined ? 2 : Number(v.k);
   if (!(Number.isFinite(K) && K >= 0.5 && K <= 5)) throw new Error(`--k: must be a number from 0.5 to 5 (got "${v.k}")`);
