@@ -1,10 +1,11 @@
-import { buildCabinetRun, type CabinetBay } from '@shared/model/cabinet-run';
+import { addCabinetRun } from '@shared/editing/cabinet';
+import { buildCabinetRun, MAX_BAYS, type CabinetBay, type CabinetSpec } from '@shared/model/cabinet-run';
 import type { FrameDocument } from '@shared/model/frame-document';
 
 // The benchmarks' generated frame, invented for them: one long cabinet run (the report, editor and API benchmarks
 // all measure this one frame).
 
-/** A long cabinet run: bays alternating base modules and side-rail drawers, 10 members a bay (+4). */
+/** Long cabinet runs: bays alternating base modules and side-rail drawers, 10 members a bay (+4 a run). */
 export function benchFrame(bays = 50): FrameDocument {
   const list: CabinetBay[] = [];
   for (let k = 0; k < bays; k++) {
@@ -24,6 +25,24 @@ export function benchFrame(bays = 50): FrameDocument {
       },
     });
   }
-  return buildCabinetRun({ name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10, bays: list });
+  // A run holds at most MAX_BAYS bays: longer frames are runs of equal length, one behind another.
+  const runs = Math.ceil(bays / MAX_BAYS);
+  const per = Math.ceil(bays / runs);
+  const spec = (k: number): CabinetSpec => ({
+    name: 'Bench run',
+    profile: '40x40-s8',
+    depth_mm: 600,
+    height_mm: 900,
+    seat_mm: 120,
+    clearance_mm: 10,
+    bays: list.slice(k * per, (k + 1) * per),
+  });
+  let doc = buildCabinetRun(spec(0));
+  for (let k = 1; k < runs; k++) {
+    const added = addCabinetRun(doc, spec(k), { x: 0, y: k * 800, z: 0 });
+    if (!added.ok) throw new Error(`bench frame: ${added.reason}`);
+    doc = added.doc;
+  }
+  return doc;
 }
 
