@@ -123,7 +123,7 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     // Undo restores the upright and the cut list.
     await page.locator('[data-view="front"]').focus();
     await page.keyboard.press('Control+z');
-    expect(await cutListRows(page)).toEqual(cutBefore);
+    await expect.poll(() => cutListRows(page)).toEqual(cutBefore);
     await pickMember(page, 'run-u1-f');
     expect(await fieldValue(page, 'part-position-x')).toBe(xBefore);
 
