@@ -5,6 +5,7 @@ import type { ToleranceClass } from '../model/settings';
 import type { FaceName } from './faces';
 import type { HardwareLine } from './hardware';
 import type { EndName, EndRole, JointKind } from './joints';
+import type { LateralCheck } from './loads';
 import type { MachiningOp } from './machining';
 import type { SpanCheck } from './member-checks';
 import type { ReportWarning } from './warnings';
@@ -186,15 +187,7 @@ export type ReportMemberCheck = {
    * In the governing case, when it pushes sideways (braking, cornering): the member bent about its other axis by
    * the inertia across it, and that combined with its vertical bending (`utilisation` already includes it).
    */
-  lateral: {
-    load_N: number;
-    bending_axis: 'x' | 'y';
-    deflection_mm: number;
-    stress_MPa: number;
-    utilisation: number;
-    combined_utilisation: number;
-    governing: 'deflection' | 'stress';
-  } | null;
+  lateral: LateralCheck | null;
 };
 
 export type ReportLoadCase = { id: string; name: string; vertical_factor: number; ax_g: number; ay_g: number; source: string };

@@ -21,8 +21,7 @@ export type ReportWarning = {
     | 'member-duplicate'
     | 'column-over-utilised'
     | 'unsymmetric-section'
-    | 'frame-racking'
-    | 'wall-fixing-not-on-frame';
+    | 'frame-racking';
   /** `error` where the design does not stand as drawn (a module tips off); warnings otherwise. */
   severity?: 'error';
   message: string;

@@ -5,7 +5,7 @@ import { rigidBodyReactions } from '@shared/engine/statics';
 import { parseFrameDocument } from '@shared/model/parse';
 import type { MemberInput } from '@shared/model/member';
 import type { ModuleInput } from '@shared/model/module';
-import { member, module } from './frames';
+import { cornerUprights, member, module } from './frames';
 
 // Rigid body on supports: ΣF = 0, ΣM = 0 (any statics text, e.g. Meriam & Kraige, Engineering Mechanics: Statics).
 // Two supports s apart, load W at x from the first: R₂ = W·x/s, R₁ = W − R₂ (the lever rule). Standard gravity
@@ -150,10 +150,7 @@ describe('supports as they are', () => {
         schemaVersion: 1,
         settings: { shockFactor: 1, inVehicle: false },
         members: [
-          member('U1', 'z', 0, 800, { x: 0, y: 0 }),
-          member('U2', 'z', 0, 800, { x: 960, y: 0 }),
-          member('U3', 'z', 0, 800, { x: 0, y: 460 }),
-          member('U4', 'z', 0, 800, { x: 960, y: 460 }),
+          ...cornerUprights(960, 460),
           member('F', 'x', 40, 960, { y: 0, z: 760 }),
           member('B', 'x', 40, 960, { y: 460, z: 760 }),
           ...mids.map((id) => member(id, 'z', 0, 760, { x: 480, y: id === 'M1' ? 0 : 460 })),
@@ -177,10 +174,7 @@ describe('supports as they are', () => {
       schemaVersion: 1,
       settings: { shockFactor: 1, inVehicle: false },
       members: [
-        member('U1', 'z', 0, 800, { x: 0, y: 0 }),
-        member('U2', 'z', 0, 800, { x: 960, y: 0 }),
-        member('U3', 'z', 0, 800, { x: 0, y: 460 }),
-        member('U4', 'z', 0, 800, { x: 960, y: 460 }),
+        ...cornerUprights(960, 460),
         member('F', 'x', 40, 960, { y: 0, z: 720 }, { profile: '40x80-s8' }),
         member('B', 'x', 40, 960, { y: 460, z: 720 }, { profile: '40x80-s8' }),
         ...bearers.map((x, k) => member(`b${k}`, 'y', 40, 460, { x, z: 780 }, { profile: '20x20-s6' })),
