@@ -26,6 +26,7 @@ import { plannerRouter } from './modules/planner/planner.routes';
 import { invitationsRouter } from './modules/invitations/invitations.routes';
 import { sharingRouter } from './modules/sharing/sharing.routes';
 import { activityRouter } from './modules/activity/activity.routes';
+import { binRouter } from './modules/bin/bin.routes';
 import { WorkerPool } from './workers/pool';
 
 export interface Services {
@@ -136,6 +137,7 @@ export function createApp(services: Services): Express {
   api.use(invitationsRouter(orm, config));
   api.use(sharingRouter(orm, config));
   api.use(activityRouter(orm));
+  api.use(binRouter(orm));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 
