@@ -14,6 +14,7 @@ import { createSessionStore, sessionMiddleware } from './http/session';
 import { authRouter } from './modules/auth/auth.routes';
 import { framesRouter } from './modules/frames/frames.routes';
 import { createHealthPool, healthRouter } from './modules/health/health.routes';
+import { projectFileRouter } from './modules/projects/project-file.routes';
 import { projectsRouter } from './modules/projects/projects.routes';
 import { workshopsRouter } from './modules/workshops/workshops.routes';
 import { attachmentsRouter } from './modules/attachments/attachments.routes';
@@ -126,6 +127,7 @@ export function createApp(services: Services): Express {
   api.use(authRouter(orm, config));
   api.use(workshopsRouter(orm));
   api.use(projectsRouter(orm));
+  api.use(projectFileRouter(orm, workers));
   api.use(framesRouter(orm));
   api.use(suppliersRouter(orm));
   api.use(ordersRouter(orm, config));

@@ -32,6 +32,7 @@ const ROUTES: { name: string; method: Method; path: (w: World) => string; fields
   { name: 'PATCH frame', method: 'patch', path: (w) => `/api/frames/${w.frameId}`, fields: ['name'] },
   { name: 'PUT document', method: 'put', path: (w) => `/api/frames/${w.frameId}/document`, fields: ['baseVersion', 'document'] },
   { name: 'POST restore', method: 'post', path: (w) => `/api/frames/${w.frameId}/restore`, fields: [] },
+  { name: 'POST project import', method: 'post', path: (w) => `/api/workshops/${w.workshopId}/projects/import`, fields: ['file'] },
   { name: 'POST project restore', method: 'post', path: (w) => `/api/projects/${w.projectId}/restore`, fields: [] },
   { name: 'POST suppliers', method: 'post', path: (w) => `/api/workshops/${w.workshopId}/suppliers`, fields: ['name', 'email', 'currency', 'stock', 'cutFee', 'notes'] },
   { name: 'POST orders', method: 'post', path: (w) => `/api/workshops/${w.workshopId}/orders`, fields: ['frameId', 'supplierId', 'mode', 'settings'] },

@@ -18,7 +18,7 @@ export async function liveFrameCounts(em: EntityManager, projectIds: string[]): 
   return new Map(rows.map((r) => [r.project_id, Number(r.count)]));
 }
 
-function toSummary(p: ProjectEntity, frameCount: number): ProjectSummary {
+export function toSummary(p: ProjectEntity, frameCount: number): ProjectSummary {
   return {
     id: p.id,
     name: p.name,
