@@ -9,8 +9,8 @@ import { newProject, signUp } from './support/new-account';
 import { resultsSettled, toScreen } from './editor-helpers';
 
 // A brand-new account lays out the default cabinet (cooler, sink, drawer stack): the drawer boxes, panels and
-// countertop are drawn in the views and can be hidden; their hardware is on the hardware list and their parts on
-// the cut list by material.
+// countertop are drawn in the views and can be hidden; their hardware is on the hardware list, their mass in the
+// total and their parts on the cut list by material.
 
 describe('drawers and panels in the editor’s views, from an empty account', () => {
   let page: Page;
@@ -58,6 +58,11 @@ describe('drawers and panels in the editor’s views, from an empty account', ()
     expect(slides).toBeDefined();
     await expect.poll(async () => (await hw.innerText()).includes('Drawer slide pair')).toBe(true);
     expect(await hw.innerText()).toContain('T-nut, drop-in');
+
+    // Their mass is in the modules' mass, said on the Weight tab.
+    await page.getByRole('tab', { name: 'Weight' }).click();
+    expect(await page.getByTestId('goods-mass').innerText()).toContain(`${Math.round((goods?.mass.total_kg ?? 0) * 10) / 10} kg`);
+    expect(await page.getByTestId('total-mass').innerText()).toBe(`${Math.round(report.mass.total_kg * 10) / 10} kg`);
 
     // The sheet parts are on the cut list, by material.
     await page.getByRole('tab', { name: 'Cut list' }).click();
