@@ -5,7 +5,7 @@ import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newProject, signUp } from './support/new-account';
+import { newWorkshopAndProject, signUp } from './support/fresh-account';
 import { resultsSettled, toScreen } from './editor-helpers';
 
 // A brand-new account lays out the default cabinet (cooler, sink, drawer stack): the drawer boxes, panels and
@@ -16,8 +16,9 @@ describe('drawers and panels in the editor’s views, from an empty account', ()
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page, 'drawers');
-    await newProject(page);
+    const stamp = Date.now().toString(36);
+    await signUp(page, `drawers-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
     await page.getByRole('button', { name: 'From a cabinet layout' }).click();
     await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
     await page.getByTestId('frame-editor').waitFor();
