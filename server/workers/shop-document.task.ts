@@ -50,7 +50,8 @@ const PDF = 'application/pdf';
 const CSV = 'text/csv; charset=utf-8';
 
 export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocumentOutput> {
-  const report = reportWithSheetGoods(parseFrameDocument(input.document)).report;
+  const frame = parseFrameDocument(input.document);
+  const report = reportWithSheetGoods(frame).report;
   const meta: ShopMeta = { ...input.meta, units: input.meta.units ?? report.units };
   const { doc, frozen } = input;
   let planned = null;
@@ -73,6 +74,6 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
     case 'order-list.csv':
       return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee })), contentType: CSV, suffix: 'order-list.csv' };
     case 'sheet-plan.pdf':
-      return { body: await sheetPlanPdf(frameSheetPlans(report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
+      return { body: await sheetPlanPdf(frameSheetPlans(frame, report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }
 }

@@ -19,8 +19,8 @@ export type RecordCollection = keyof RecordMap;
 export const RECORD_COLLECTIONS: readonly RecordCollection[] = ['members', 'modules', 'runs', 'datums', 'profiles', 'joinMethods'];
 
 /** Document fields that are replaced whole (they have no ids of their own). */
-export type FieldKey = 'name' | 'settings' | 'units' | 'joints';
-export const FIELD_KEYS: readonly FieldKey[] = ['name', 'settings', 'units', 'joints'];
+export type FieldKey = 'name' | 'settings' | 'units' | 'joints' | 'goods';
+export const FIELD_KEYS: readonly FieldKey[] = ['name', 'settings', 'units', 'joints', 'goods'];
 
 type RecordOpOf<C extends RecordCollection> = {
   kind: 'record';

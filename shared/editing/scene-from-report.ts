@@ -7,6 +7,7 @@ import type { Vec3 } from '../model/axis';
 import type { FrameDocument } from '../model/frame-document';
 import { InputError } from '../errors';
 import { sheetGoods, type GoodsBox, type SheetGoods } from '../panels/sheet-goods';
+import { goodsOptionsOf } from '../panels/goods-options';
 import { boundsOf, type Scene, type SceneBay, type SceneGoods, type SceneMember, type SceneModule } from './scene';
 
 const toBox = (min: Vec3, max: Vec3): Box => ({ min: [min.x, min.y, min.z], max: [max.x, max.y, max.z] });
@@ -65,17 +66,17 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport, sheetGo
     members,
     modules,
     bays,
-    goods: sheetGoodsOf === undefined ? goodsOf(report) : (sheetGoodsOf?.boxes ?? []).map(toSceneGoods),
+    goods: sheetGoodsOf === undefined ? goodsOf(doc, report) : (sheetGoodsOf?.boxes ?? []).map(toSceneGoods),
     bounds: boundsOf([...members.map((m) => m.box), ...modules.map((m) => m.box)]),
     cog: report.mass.cog_mm,
   };
 }
 
-/** The default drawers, panels and countertop of a run of bays, for drawing; none where they cannot be sized. */
-function goodsOf(report: FrameReport): SceneGoods[] {
+/** The frame's drawers, panels and countertop, for drawing; none where they cannot be sized. */
+function goodsOf(doc: FrameDocument, report: FrameReport): SceneGoods[] {
   if (!report.bays.length) return [];
   try {
-    return sheetGoods(report).boxes.map(toSceneGoods);
+    return sheetGoods(report, goodsOptionsOf(doc)).boxes.map(toSceneGoods);
   } catch (err) {
     if (err instanceof InputError) return [];
     throw err;

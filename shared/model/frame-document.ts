@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
+import { goodsSettingsSchema } from '../panels/goods-settings';
 import { datumSchema } from './datum';
 import { nameSchema } from './ids';
 import { jointSettingSchema } from './joint';
@@ -33,6 +34,8 @@ export const frameDocumentSchema = z.strictObject({
   runs: list(runSchema, LIMITS.runs, 'runs'),
   joinMethods: list(joinMethodSchema, LIMITS.joinMethods, 'join methods'),
   joints: list(jointSettingSchema, LIMITS.joints, 'joint settings'),
+  /** Drawers, panels and sheets as the builder chose them; absent on frames that keep the defaults. */
+  goods: goodsSettingsSchema.optional(),
 });
 export type FrameDocument = z.output<typeof frameDocumentSchema>;
 /** What a caller may write: defaults filled in on parsing. */

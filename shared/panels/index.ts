@@ -8,3 +8,5 @@ export * from './slides';
 export * from './openings';
 export * from './sheet-goods';
 export * from './report-with-goods';
+export * from './goods-settings';
+export * from './goods-options';

@@ -7,7 +7,8 @@ import type { HardwareLine as ReportHardwareLine, HardwareKind } from '../engine
 import { InputError } from '../errors';
 import type { FrameDocument } from '../model/frame-document';
 import type { HardwareLine } from './parts';
-import { defaultSheetGoodsOptions, sheetGoods, type SheetGoods, type SheetGoodsOptions } from './sheet-goods';
+import { goodsOptionsOf } from './goods-options';
+import { sheetGoods, type SheetGoods, type SheetGoodsOptions } from './sheet-goods';
 
 /** Rough unit masses in grams for the goods' hardware (from memory, not a maker's data; the report marks hardware mass approximate). */
 const UNIT_MASS_G: [RegExp, HardwareKind, number][] = [
@@ -74,7 +75,7 @@ export type ReportWithGoods = { report: FrameReport; goods: SheetGoods | null };
  * for the openings the goods are sized from, once with the modules carrying the goods' mass (the goods' sizes do not
  * depend on mass, so one pass each is enough).
  */
-export function reportWithSheetGoods(doc: FrameDocument, ropts: ReportOptions = {}, gopts: SheetGoodsOptions = defaultSheetGoodsOptions()): ReportWithGoods {
+export function reportWithSheetGoods(doc: FrameDocument, ropts: ReportOptions = {}, gopts: SheetGoodsOptions = goodsOptionsOf(doc)): ReportWithGoods {
   const first = computeReport(doc, ropts);
   if (!first.bays.length) return { report: first, goods: null };
   let goods: SheetGoods;

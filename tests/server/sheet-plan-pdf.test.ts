@@ -10,11 +10,12 @@ import { pdfText } from '../support/pdf-text';
 // The example side galley (invented) through the whole chain: openings → drawers, faces, panels, countertop →
 // sheet plans per material → the printed plan.
 const spec = parseCabinetSpec(JSON.parse(readFileSync(new URL('../../scripts/examples/side-galley-spec.json', import.meta.url), 'utf8')));
-const report = computeReport(buildCabinetRun(spec));
+const doc = buildCabinetRun(spec);
+const report = computeReport(doc);
 
 describe('printed sheet plan', () => {
   it('a heading per material, a diagram heading per sheet, every cut numbered and every part labelled', async () => {
-    const plans = frameSheetPlans(report, 300);
+    const plans = frameSheetPlans(doc, report, 300);
     expect(plans.length).toBeGreaterThan(1);
     const buf = await sheetPlanPdf(plans, meta);
     expect(buf.subarray(0, 5).toString()).toBe('%PDF-');
@@ -31,7 +32,8 @@ describe('printed sheet plan', () => {
   });
   it('a countertop longer than the sheet (a 2.6 m run) is listed as not planned, and the rest is still planned', async () => {
     const long = parseCabinetSpec({ ...spec, bays: [...spec.bays, { id: 'bay-extra', width_mm: 900 }] });
-    const plans = frameSheetPlans(computeReport(buildCabinetRun(long)), 200);
+    const longDoc = buildCabinetRun(long);
+    const plans = frameSheetPlans(longDoc, computeReport(longDoc), 200);
     const top = plans.find((m) => m.oversize.some((o) => o.startsWith('Countertop')));
     expect(top).toBeDefined();
     const { text } = await pdfText(await sheetPlanPdf(plans, meta));
@@ -39,7 +41,7 @@ describe('printed sheet plan', () => {
     expect(plans.some((m) => m.plan && m.plan.sheetCount > 0)).toBe(true);
   });
   it('a frame with no bays prints that there is nothing to cut from sheets', async () => {
-    const { text } = await pdfText(await sheetPlanPdf(frameSheetPlans({ ...report, bays: [] }), meta));
+    const { text } = await pdfText(await sheetPlanPdf(frameSheetPlans(doc, { ...report, bays: [] }), meta));
     expect(text).toContain('no drawers, faces, panels or countertop');
   });
 });

@@ -1,0 +1,37 @@
+// A frame's own sheet-goods choices turned into what the sizing and the sheet planner take, so the editor, the
+// report worker and the shop documents all read the same ones.
+import type { FrameDocument } from '../model/frame-document';
+import type { SheetStock } from '../sheets/from-goods';
+import { goodsSettingsSchema, type GoodsSettings } from './goods-settings';
+import type { SheetMaterial } from './materials';
+import { defaultSheetGoodsOptions, type SheetGoodsOptions } from './sheet-goods';
+import { slidePreset } from './slides';
+
+/** The frame's settings, or the defaults where it has none. */
+export function goodsSettingsOf(doc: Pick<FrameDocument, 'goods'>): GoodsSettings {
+  return doc.goods ?? goodsSettingsSchema.parse({});
+}
+
+export function goodsOptionsOf(doc: Pick<FrameDocument, 'goods'>): SheetGoodsOptions {
+  const s = goodsSettingsOf(doc);
+  const d = defaultSheetGoodsOptions();
+  const own = (m: SheetMaterial): SheetMaterial => (s.densities[m.id] ? { ...m, density_kg_m3: s.densities[m.id], typical: false } : m);
+  return {
+    ...d,
+    slide: { ...slidePreset(s.slide, s.series), ...s.slideValues },
+    joint: s.joint,
+    faceStyle: s.faceStyle,
+    panelMount: s.panelMount,
+    box: own(d.box),
+    bottom: own(d.bottom),
+    face: own(d.face),
+    panel: own(d.panel),
+    top: own(d.top),
+  };
+}
+
+/** Offcuts on hand first and free, so a plan takes them before buying; then as many bought sheets as needed. */
+export function sheetStockOf(doc: Pick<FrameDocument, 'goods'>): { sheets: SheetStock[]; kerf: number; trim: number } {
+  const s = goodsSettingsOf(doc);
+  return { sheets: [...s.offcuts.filter((o) => (o.qty ?? 0) > 0), { ...s.sheet, qty: null }], kerf: s.kerf, trim: s.trim };
+}

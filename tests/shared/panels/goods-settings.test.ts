@@ -1,0 +1,55 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { applyChange, diffDocuments, invertChange } from '@shared/editing/change';
+import { buildCabinetRun, parseCabinetSpec } from '@shared/model/cabinet-run';
+import { frameDocumentSchema } from '@shared/model/frame-document';
+import { goodsSettingsSchema, reportWithSheetGoods, sheetStockOf } from '@shared/panels/index';
+import { parseFrameDocument } from '@shared/model/parse';
+
+// The example side galley (scripts/examples/side-galley-spec.json, invented): the drawer over the cooler has a
+// 420 mm wide opening between the uprights.
+const spec = parseCabinetSpec(JSON.parse(readFileSync(new URL('../../../scripts/examples/side-galley-spec.json', import.meta.url), 'utf8')));
+const doc = buildCabinetRun(spec);
+const cooler = (d: typeof doc) => reportWithSheetGoods(d).goods?.drawers.find((x) => x.opening.module_id === 'cooler-drawer');
+const slideLines = (d: typeof doc) => reportWithSheetGoods(d).report.hardware.lines.filter((l) => l.name.startsWith('Drawer slide pair'));
+
+describe('sheet-goods choices kept with the frame', () => {
+  it('without choices the report keeps the side-mount default: 420 − 2 × 12.7 = 394.6 mm box (1/2 in a side, common practice, no source)', () => {
+    expect(doc.goods).toBeUndefined();
+    expect(cooler(doc)?.box.box.width_mm).toBeCloseTo(394.6, 9);
+    expect(slideLines(doc).every((l) => l.name.includes('side-mount'))).toBe(true);
+  });
+  it('under-mount chosen: 420 − 2 × 5/16 in = 404.125 mm box (typical sheet values, from memory), and the hardware list orders under-mount slides', () => {
+    const under = { ...doc, goods: goodsSettingsSchema.parse({ slide: 'under-mount' }) };
+    expect(cooler(under)?.box.box.width_mm).toBeCloseTo(420 - 2 * 25.4 * (5 / 16), 9);
+    const lines = slideLines(under);
+    expect(lines.length).toBeGreaterThan(0);
+    expect(lines.every((l) => l.name.includes('under-mount'))).toBe(true);
+  });
+  it('the builder’s own side deduction over the preset resizes the box; a denser sheet makes the report heavier', () => {
+    const own = { ...doc, goods: goodsSettingsSchema.parse({ slideValues: { sideDeduction_mm: 20 }, densities: { 'birch-12': 900 } }) };
+    expect(cooler(own)?.box.box.width_mm).toBeCloseTo(380, 9);
+    expect(reportWithSheetGoods(own).report.mass.total_kg).toBeGreaterThan(reportWithSheetGoods(doc).report.mass.total_kg);
+  });
+  it('sheets: offcuts on hand come first, the bought sheet last in any number', () => {
+    const d = { ...doc, goods: goodsSettingsSchema.parse({ sheet: { length: 2500, width: 1250, price: 60 }, offcuts: [{ length: 800, width: 600, qty: 2 }, { length: 700, width: 500, qty: 0 }], kerf: 2 }) };
+    expect(sheetStockOf(d)).toEqual({ sheets: [{ length: 800, width: 600, qty: 2 }, { length: 2500, width: 1250, price: 60, qty: null }], kerf: 2, trim: 10 });
+    expect(sheetStockOf(doc).sheets).toEqual([{ length: 2440, width: 1220, qty: null }]);
+  });
+  it('a stored frame keeps its choices through parsing; out-of-bound values are refused naming the field', () => {
+    const json = JSON.parse(JSON.stringify({ ...doc, goods: { slide: 'under-mount', joint: 'dado' } }));
+    expect(parseFrameDocument(json).goods).toMatchObject({ slide: 'under-mount', joint: 'dado', faceStyle: 'inset' });
+    const bad = frameDocumentSchema.safeParse({ ...json, goods: { kerf: 99 } });
+    expect(bad.success).toBe(false);
+    expect(bad.error?.issues[0].path).toEqual(['goods', 'kerf']);
+    expect(frameDocumentSchema.safeParse({ ...json, goods: { offcuts: Array.from({ length: 31 }, () => ({ length: 500, width: 500 })) } }).success).toBe(false);
+    expect(frameDocumentSchema.safeParse({ ...json, goods: { slideValues: { sideDeduction_mm: 1e9 } } }).success).toBe(false);
+  });
+  it('a choice is one field change: undo gives back the frame without it', () => {
+    const after = { ...doc, goods: goodsSettingsSchema.parse({ slide: 'under-mount' }) };
+    const change = diffDocuments(doc, after, 'Slides: under-mount');
+    expect(change.ops).toHaveLength(1);
+    expect(applyChange(doc, change).goods?.slide).toBe('under-mount');
+    expect(applyChange(applyChange(doc, change), invertChange(change)).goods).toBeUndefined();
+  });
+});
