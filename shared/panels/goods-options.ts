@@ -35,3 +35,14 @@ export function sheetStockOf(doc: Pick<FrameDocument, 'goods'>): { sheets: Sheet
   const s = goodsSettingsOf(doc);
   return { sheets: [...s.offcuts.filter((o) => (o.qty ?? 0) > 0), { ...s.sheet, qty: null }], kerf: s.kerf, trim: s.trim };
 }
+
+/**
+ * The frame with some of its sheet-goods choices replaced; null when a value is out of its bounds (the frame keeps
+ * the last good one). A new slide type starts again from its preset, so the old type's values do not carry over.
+ */
+export function withGoodsSettings<D extends Pick<FrameDocument, 'goods'>>(doc: D, patch: Partial<GoodsSettings>): D | null {
+  const was = goodsSettingsOf(doc);
+  const next = { ...was, ...(patch.slide && patch.slide !== was.slide ? { slideValues: {} } : {}), ...patch };
+  const ok = goodsSettingsSchema.safeParse(next);
+  return ok.success ? { ...doc, goods: ok.data } : null;
+}

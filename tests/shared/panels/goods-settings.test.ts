@@ -1,6 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { applyChange, diffDocuments, invertChange } from '@shared/editing/change';
+import { sceneFromReport } from '@shared/editing/scene-from-report';
+import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, parseCabinetSpec } from '@shared/model/cabinet-run';
 import { frameDocumentSchema } from '@shared/model/frame-document';
 import { goodsSettingsSchema, reportWithSheetGoods, sheetStockOf } from '@shared/panels/index';
@@ -30,6 +32,16 @@ describe('sheet-goods choices kept with the frame', () => {
     const own = { ...doc, goods: goodsSettingsSchema.parse({ slideValues: { sideDeduction_mm: 20 }, densities: { 'birch-12': 900 } }) };
     expect(cooler(own)?.box.box.width_mm).toBeCloseTo(380, 9);
     expect(reportWithSheetGoods(own).report.mass.total_kg).toBeGreaterThan(reportWithSheetGoods(doc).report.mass.total_kg);
+  });
+  it('the views draw the box the frame chose: under-mount boxes are wider between the same uprights', () => {
+    const under = { ...doc, goods: goodsSettingsSchema.parse({ slide: 'under-mount' }) };
+    const drawerWidth = (d: typeof doc) => {
+      const b = sceneFromReport(d, computeReport(d)).goods.find((g) => g.kind === 'drawer' && g.id.includes('cooler-drawer'));
+      expect(b).toBeDefined();
+      // The galley runs along x: a drawer box's width is its x extent.
+      return b!.box.max[0] - b!.box.min[0];
+    };
+    expect(drawerWidth(under)).toBeGreaterThan(drawerWidth(doc));
   });
   it('sheets: offcuts on hand come first, the bought sheet last in any number', () => {
     const d = { ...doc, goods: goodsSettingsSchema.parse({ sheet: { length: 2500, width: 1250, price: 60 }, offcuts: [{ length: 800, width: 600, qty: 2 }, { length: 700, width: 500, qty: 0 }], kerf: 2 }) };
