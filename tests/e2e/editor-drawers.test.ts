@@ -41,4 +41,19 @@ describe('the Drawers & panels tab', () => {
     await expect.poll(async () => (await sheets.innerText()).includes('from offcuts on hand')).toBe(true);
     await page.screenshot({ path: screenshotPath('editor-drawers.png') });
   });
+
+  it('the slide type chosen is saved with the frame: after a reload the box is still sized for under-mount slides', async () => {
+    // Concealed under-mount, typical values (from memory): 5/16 in a side → 420 − 2 × 7.9375 = 404.125 mm wide.
+    const under = formatLength(420 - 2 * 25.4 * (5 / 16), 'mm');
+    await page.getByTestId('goods-slide').click();
+    await page.getByRole('option', { name: 'Concealed under-mount' }).click();
+    const row = page.getByTestId('drawer-cooler-drawer');
+    await expect.poll(async () => (await row.textContent()) ?? '').toContain(`${under} ×`);
+    await page.getByTestId('save-state').getByText('All changes saved').waitFor();
+    await page.reload();
+    await page.getByRole('tab', { name: 'Drawers & panels' }).click();
+    await page.getByTestId('drawer-cooler-drawer').waitFor();
+    expect(await page.getByTestId('drawer-cooler-drawer').textContent()).toContain(`${under} ×`);
+    expect(await page.getByTestId('goods-slide').innerText()).toContain('Concealed under-mount');
+  });
 });
