@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { addBay, removeBay, trySwapModules } from '@shared/editing/bays';
+import { addBay, removeBay } from '@shared/editing/bays';
+import { trySwapModules } from '@shared/editing/swap';
 import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, type CabinetModule, type CabinetSpec } from '@shared/model/cabinet-run';
 import { MODULE_KINDS } from '@shared/model/module';
