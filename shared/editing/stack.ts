@@ -109,7 +109,13 @@ function relayStack(doc: FrameDocument, run: Run, bay: Bay, levels: readonly Lev
   const nextBay: Bay = { id: bay.id, ...(bay.name !== undefined ? { name: bay.name } : {}) };
   if (levels.length > 0) nextBay.module = levels[0].module.id;
   if (levels.length > 1) nextBay.stack = levels.slice(1).map((l) => l.module.id);
-  if (bay.width_mm !== undefined || levels.length === 0) nextBay.width_mm = bay.width_mm ?? tidy(width);
+  // A fixed width stays while the bay can hold its widest module; an open bay too narrow follows its modules.
+  const clearance = bay.clearance_mm ?? run.clearance_mm;
+  const need = Math.max(0, ...levels.map((l) => l.module.size.w_mm)) + 2 * clearance;
+  if (levels.length === 0 || (bay.width_mm !== undefined && (bay.width_mm + 1e-6 >= need || bayModuleIds(bay).length > 0))) nextBay.width_mm = bay.width_mm ?? tidy(width);
+  if (levels.length > 0 && bay.width_mm !== undefined && bay.width_mm + 1e-6 < need && bayModuleIds(bay).length > 0) {
+    return refuse(`${capital(bayWords(run, run.bays.indexOf(bay)))} is ${tidy(bay.width_mm)} mm wide; its widest module needs ${tidy(need)} mm with the clearance either side. Widen the bay or let it follow its module first.`);
+  }
   if (bay.clearance_mm !== undefined) nextBay.clearance_mm = bay.clearance_mm;
 
   let built = buildCabinetRun({
@@ -119,12 +125,16 @@ function relayStack(doc: FrameDocument, run: Run, bay: Bay, levels: readonly Lev
     depth_mm: 600,
     height_mm: 1000,
     seat_mm: 0,
-    clearance_mm: bay.clearance_mm ?? run.clearance_mm,
-    bays: [{ id: bay.id, width_mm: tidy(width), ...(levels.length > 0 ? { module: asLayoutModule(levels[0]), stack: levels.slice(1).map(asLayoutModule) } : {}) }],
+    clearance_mm: clearance,
+    bays: [{ id: bay.id, ...(nextBay.width_mm !== undefined || levels.length === 0 ? { width_mm: nextBay.width_mm ?? tidy(width) } : {}), ...(levels.length > 0 ? { module: asLayoutModule(levels[0]), stack: levels.slice(1).map(asLayoutModule) } : {}) }],
   });
   built = renameDatumRefs(built, (id) => datumMap.get(id) ?? id);
   const frameMembers = new RegExp(`^(${run.id.replace(/-/g, '\\-')}-[ux]\\d+-|${bay.id.replace(/-/g, '\\-')}-(top|low)-[fb]$)`);
-  const members = built.members.filter((m) => !frameMembers.test(m.id)).map((m) => ({ ...m, profile: rail?.profile ?? m.profile }));
+  // The layout built for this bay alone calls it bay 1; its members take the bay's place in the run.
+  const bayName = `Bay ${run.bays.indexOf(bay) + 1}`;
+  const members = built.members
+    .filter((m) => !frameMembers.test(m.id))
+    .map((m) => ({ ...m, profile: rail?.profile ?? m.profile, ...(m.name ? { name: m.name.replace(/^Bay 1\b/, bayName) } : {}) }));
   const ids = new Set(levels.map((l) => l.module.id));
   const ownDatums = new Set([...ids, ...gone].flatMap(moduleDatumIds));
   const datums = built.datums.filter((d) => ownDatums.has(d.id));
