@@ -1,22 +1,24 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
+import { newWorkshopAndProject, signUp } from './support/fresh-account';
 import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { bearingByModule, cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
-import { newProject, signUp } from './support/new-account';
 
 // A builder with a brand-new account (signed up here, no demo data) lays out their own cabinet, reads its loads,
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
+
+const stamp = Date.now().toString(36);
 
 describe('a builder lays out and re-lays their own cabinet from an empty account', () => {
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page);
-    await newProject(page);
+    await signUp(page, `builder-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
   });
 
   it('lays out cooler, sink and drawers; loads per module; swap, undo; a bay added at the end and removed', async () => {
@@ -117,8 +119,8 @@ describe('options of a module, compared side by side', () => {
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page, 'options');
-    await newProject(page);
+    await signUp(page, `options-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
     await page.getByRole('button', { name: 'From a cabinet layout' }).click();
     await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
     await page.getByTestId('frame-editor').waitFor();
