@@ -123,7 +123,9 @@ export type CuttingState = {
   frameName: string;
   projectName: string;
   currentVersion: number;
-  session: { id: string; frameVersion: number; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
+  /** What cutting depends on in the design as saved now (see cuttingKey); the banner compares it with the session's. */
+  currentCuttingKey: string;
+  session: { id: string; frameVersion: number; cuttingKey: string; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
   ticks: CutTickView[];
   /** The design changed since cutting started: how the parts already cut are reused in the new design. */
   reuse: WhatChanged | null;
