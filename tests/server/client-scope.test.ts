@@ -136,6 +136,7 @@ const REFUSED: Record<string, Call[]> = {
   'GET /api/orders/:orderId/order.pdf': [['get', (i) => `/api/orders/${i.order}/order.pdf`]],
   'GET /api/orders/:orderId/order.csv': [['get', (i) => `/api/orders/${i.order}/order.csv`]],
   'POST /api/orders/:orderId/send': [['post', (i) => `/api/orders/${i.order}/send`]],
+  'GET /api/orders/:orderId/send-preview': [['get', (i) => `/api/orders/${i.order}/send-preview`]],
   'PATCH /api/orders/:orderId': [['patch', (i) => `/api/orders/${i.order}`, { status: 'received' }]],
   'DELETE /api/orders/:orderId': [['delete', (i) => `/api/orders/${i.order}`]],
   'GET /api/frames/:frameId/cutting': [['get', (i) => `/api/frames/${i.FA}/cutting`]],
