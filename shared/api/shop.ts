@@ -105,7 +105,11 @@ export type OrderSummary = {
 export type OrderDetail = OrderSummary & { contents: OrderContents };
 
 /** GET /api/orders/:orderId/order.pdf?copy=: the shop's copy (both ways of buying) or the one the supplier gets. */
-export const orderPdfQuerySchema = z.object({ copy: z.enum(['shop', 'supplier'], { message: "Must be 'shop' or 'supplier'" }).default('shop') });
+export const orderPdfQuerySchema = z.object({
+  copy: z.enum(['shop', 'supplier'], { message: "Must be 'shop' or 'supplier'" }).default('shop'),
+  /** inline: shown in the page (the preview before sending) rather than downloaded. */
+  view: z.enum(['inline', 'download'], { message: "Must be 'inline' or 'download'" }).default('download'),
+});
 
 /** GET /api/orders/:orderId/send-preview: the e-mail "Send to supplier" would send, exactly. */
 export type SendPreview = { to: string; subject: string; text: string; attachment: { filename: string; url: string } };

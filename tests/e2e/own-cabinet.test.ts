@@ -1,37 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
+import { newWorkshopAndProject, signUp } from './support/new-account';
 import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
-import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
+import { cutListRows, drawRailBetween, fieldValue, itemInView, pickMember, swapModules } from './editor-helpers';
 
 // A builder with a brand-new account (signed up here, no demo data) lays out their own cabinet, reads its loads,
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
 
 const stamp = Date.now().toString(36);
-
-async function signUp(page: Page, who = 'builder'): Promise<void> {
-  await page.goto('/sign-in');
-  await page.getByRole('tab', { name: 'Create account' }).click();
-  await page.getByLabel('Your name').fill('New Builder');
-  await page.getByLabel('E-mail').fill(`${who}-${stamp}@example.test`);
-  await page.getByLabel('Password', { exact: true }).fill('a long enough password');
-  await page.getByRole('button', { name: 'Create account', exact: true }).click();
-  await page.getByRole('heading', { name: 'Workshops', level: 1 }).waitFor();
-}
-
-async function newProject(page: Page): Promise<void> {
-  await page.getByRole('button', { name: 'New workshop' }).first().click();
-  await page.getByLabel('Workshop name').fill(`Van shop ${stamp}`);
-  await page.getByRole('button', { name: 'Create', exact: true }).click();
-  await page.getByRole('heading', { name: 'Projects', level: 1 }).waitFor();
-  await page.getByRole('button', { name: 'New project' }).first().click();
-  await page.getByLabel('Project name').fill('My galley');
-  await page.getByRole('button', { name: 'Create project' }).click();
-  await page.getByRole('heading', { name: 'My galley', level: 1 }).waitFor();
-}
 
 /** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
 async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
@@ -50,8 +30,8 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page);
-    await newProject(page);
+    await signUp(page, `builder-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
   });
 
   it('lays out cooler, sink and drawers; loads per module; swap, undo; a bay added at the end and removed', async () => {
@@ -83,15 +63,7 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
 
     // A shelf rail drawn by hand across the sink's bay, its ends snapped to the uprights' faces: it re-lays with them.
     const left = itemInView(report, 'front', 'run-u1-f');
-    const right = itemInView(report, 'front', 'run-u2-f');
-    await page.getByRole('button', { name: 'Draw', exact: true }).click();
-    const a = await toScreen(page, 'front', left.x1 + 4, 420);
-    const b = await toScreen(page, 'front', right.x0 - 4, 420);
-    await page.mouse.move(a.x, a.y);
-    await page.mouse.down();
-    for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
-    await page.mouse.up();
-    await page.getByRole('button', { name: 'Pick', exact: true }).click();
+    await drawRailBetween(page, report, 'run-u1-f', 'run-u2-f', 420);
 
     // The upright between the cooler's and the sink's bays, before the swap.
     await pickMember(page, 'run-u1-f');
@@ -99,12 +71,7 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     const cutBefore = await cutListRows(page);
 
     // Swap the cooler and the sink: pick one, Shift-click the other in the list, press S.
-    await page.getByRole('tab', { name: 'Modules' }).click();
-    const modules = page.getByRole('list', { name: 'Modules in this frame' });
-    await modules.getByRole('button', { name: /Compressor cooler/ }).click();
-    await modules.getByRole('button', { name: /Sink with tap/ }).click({ modifiers: ['Shift'] });
-    await page.locator('[data-view="front"]').focus();
-    await page.keyboard.press('s');
+    await swapModules(page, /Compressor cooler/, /Sink with tap/);
     const changed = page.getByTestId('what-changed');
     await changed.waitFor();
     expect(await changed.innerText()).toMatch(/Swap “?Compressor cooler”? and “?Sink with tap”?/);
@@ -152,8 +119,8 @@ describe('options of a module, compared side by side', () => {
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page, 'options');
-    await newProject(page);
+    await signUp(page, `options-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
     await page.getByRole('button', { name: 'From a cabinet layout' }).click();
     await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
     await page.getByTestId('frame-editor').waitFor();

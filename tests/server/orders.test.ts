@@ -12,10 +12,11 @@ useShopWorld((world) => {
   w = world;
 });
 const c = (a: Actor) => w.clients.get(a)!;
-const binaryParser = (r: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+const binaryParser = (r: import('supertest').Response, cb: (err: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
-  r.on('data', (d: Buffer) => chunks.push(d));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
+  const stream = r as unknown as NodeJS.ReadableStream;
+  stream.on('data', (d: Buffer) => chunks.push(d));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 };
 
 const supplierBody = {
@@ -92,11 +93,7 @@ describe('orders', () => {
   });
 
   it('serves the order as PDF and CSV to members only', async () => {
-    const pdf = await c('viewer').get(`/api/orders/${order.id}/order.pdf`).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (d: Buffer) => chunks.push(d));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const pdf = await c('viewer').get(`/api/orders/${order.id}/order.pdf`).buffer(true).parse(binaryParser);
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     const { text } = await pdfText(pdf.body as Buffer);

@@ -115,7 +115,7 @@ export async function supplierMessage(em: EntityManager, o: OrderEntity): Promis
     to: supplier?.email ?? o.contents.supplierEmail,
     subject: `Order ${o.reference}: ${o.contents.meta.project} (${o.contents.meta.workshop})`,
     text: `${o.contents.supplierText ?? o.contents.text.split('\n\nFor comparison')[0]}\n\nThe order list is attached as a PDF.\n`,
-    attachment: { filename: `order-${o.reference}.pdf`, url: `/api/orders/${o.id}/order.pdf?copy=supplier` },
+    attachment: { filename: `order-${o.reference}.pdf`, url: `/api/orders/${o.id}/order.pdf?copy=supplier&view=inline` },
   };
 }
 
