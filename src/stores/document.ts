@@ -306,11 +306,16 @@ export const useDocumentStore = defineStore('document', () => {
     saving.markSaved(doc.value);
   }
 
-  /** Keep ours: save it on top of theirs (theirs stays in the saved versions). */
+  /**
+   * Keep ours: save it on top of theirs. Theirs is kept as a revision first, even when it was saved under the same
+   * account (another tab or device) within the same editing stretch, so it stays in the saved versions.
+   */
   function keepMine(current: VersionConflictCurrent): void {
-    if (frameId.value) dropDraft(frameId.value);
+    const id = frameId.value;
+    if (id) dropDraft(id);
     saving.adoptVersion(current.version, null);
-    saving.schedule(0);
+    const kept = id ? api.frames.keepRevision(id, { baseVersion: current.version }).catch(() => undefined) : Promise.resolve();
+    void kept.then(() => saving.schedule(0));
   }
 
   function dismissSummary(): void {
