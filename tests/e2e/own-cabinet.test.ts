@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/new-account';
+import { newWorkshopAndProject, signUp } from './support/fresh-account';
 import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';

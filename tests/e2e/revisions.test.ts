@@ -4,7 +4,7 @@ import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/new-account';
+import { newWorkshopAndProject, signUp } from './support/fresh-account';
 import { cutListRows, drawRailBetween, swapModules } from './editor-helpers';
 
 // From a brand-new account: lay out a cabinet, draw a rail, save a named revision, change the frame, compare the

@@ -1,8 +1,8 @@
 import type { Page } from 'playwright-core';
 
-// A brand-new account with nothing in it, made through the sign-up form as a new customer would, and its first
-// workshop and project made through the pages.
+// A builder with a brand-new account and nothing else: how a feature is shown to work beyond the demo data.
 
+/** Signs up through the form as a new builder and waits for the (empty) workshops page. */
 export async function signUp(page: Page, email: string, name = 'New Builder'): Promise<void> {
   await page.goto('/sign-in');
   await page.getByRole('tab', { name: 'Create account' }).click();
@@ -13,6 +13,7 @@ export async function signUp(page: Page, email: string, name = 'New Builder'): P
   await page.getByRole('heading', { name: 'Workshops', level: 1 }).waitFor();
 }
 
+/** From the workshops page: a new workshop, and in it a new project, left open on the project's page. */
 export async function newWorkshopAndProject(page: Page, workshop: string, project: string): Promise<void> {
   await page.getByRole('button', { name: 'New workshop' }).first().click();
   await page.getByLabel('Workshop name').fill(workshop);
