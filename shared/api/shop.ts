@@ -104,6 +104,16 @@ export type OrderSummary = {
 };
 export type OrderDetail = OrderSummary & { contents: OrderContents };
 
+/** GET /api/orders/:orderId/order.pdf?copy=: the shop's copy (both ways of buying) or the one the supplier gets. */
+export const orderPdfQuerySchema = z.object({
+  copy: z.enum(['shop', 'supplier'], { message: "Must be 'shop' or 'supplier'" }).default('shop'),
+  /** inline: shown in the page (the preview before sending) rather than downloaded. */
+  view: z.enum(['inline', 'download'], { message: "Must be 'inline' or 'download'" }).default('download'),
+});
+
+/** GET /api/orders/:orderId/send-preview: the e-mail "Send to supplier" would send, exactly. */
+export type SendPreview = { to: string; subject: string; text: string; attachment: { filename: string; url: string } };
+
 // ----- cutting at the saw -----
 
 export type CutSessionPlan = {
@@ -123,7 +133,9 @@ export type CuttingState = {
   frameName: string;
   projectName: string;
   currentVersion: number;
-  session: { id: string; frameVersion: number; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
+  /** What cutting depends on in the design as saved now (see cuttingKey); the banner compares it with the session's. */
+  currentCuttingKey: string;
+  session: { id: string; frameVersion: number; cuttingKey: string; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
   ticks: CutTickView[];
   /** The design changed since cutting started: how the parts already cut are reused in the new design. */
   reuse: WhatChanged | null;

@@ -64,6 +64,8 @@ export const useDocumentStore = defineStore('document', () => {
   let summaryLabel: { revision: number; label: string } | null = null;
   /** Bumped on every applied change, so views can watch one number. */
   const revision = ref(0);
+  /** The version the frame was opened (or last kept) at: saves since then make leaving keep a revision. */
+  let savedAtOpen = 0;
 
   const history = createHistory();
   const historyTick = ref(0);
@@ -138,6 +140,7 @@ export const useDocumentStore = defineStore('document', () => {
       readOnly.value = true;
     }
     saving.reset(frame.version, doc.value);
+    savedAtOpen = frame.version;
     // A draft that lost a save race before the page was left: bring it back with the choice still open.
     const draft = canWrite && doc.value ? loadDraft(frame.id) : null;
     if (draft) {
@@ -155,8 +158,34 @@ export const useDocumentStore = defineStore('document', () => {
     else reports.cancel();
   }
 
+  /**
+   * "Save revision": whatever waits is saved, then the version saved is kept as a revision of its own (named, if
+   * given). Resolves to false when there is nothing saved to keep (a conflict open, no frame).
+   */
+  async function keepRevision(name?: string | null): Promise<boolean> {
+    const id = frameId.value;
+    if (!id || readOnly.value) return false;
+    await saving.flush();
+    if (saving.conflict || frameId.value !== id) return false;
+    await api.frames.keepRevision(id, { baseVersion: saving.baseVersion, name });
+    savedAtOpen = saving.baseVersion;
+    return true;
+  }
+
   function close(): void {
-    void saving.flush();
+    const id = frameId.value;
+    const edited = id !== null && !readOnly.value && (saving.dirty || saving.baseVersion !== savedAtOpen);
+    const flushed = saving.flush();
+    // Leaving the editor ends the editing stretch: what was saved in this visit stays as a revision.
+    if (edited && id) {
+      void flushed.then(() => {
+        if (frameId.value !== null || saving.conflict) return;
+        return api.frames.keepRevision(id, { baseVersion: saving.baseVersion }).then(
+          () => undefined,
+          () => undefined,
+        );
+      });
+    }
     frameId.value = null;
     doc.value = null;
     report.value = null;
@@ -283,11 +312,16 @@ export const useDocumentStore = defineStore('document', () => {
     saving.markSaved(doc.value);
   }
 
-  /** Keep ours: save it on top of theirs (theirs stays in the saved versions). */
+  /**
+   * Keep ours: save it on top of theirs. Theirs is kept as a revision first, even when it was saved under the same
+   * account (another tab or device) within the same editing stretch, so it stays in the saved versions.
+   */
   function keepMine(current: VersionConflictCurrent): void {
-    if (frameId.value) dropDraft(frameId.value);
+    const id = frameId.value;
+    if (id) dropDraft(id);
     saving.adoptVersion(current.version, null);
-    saving.schedule(0);
+    const kept = id ? api.frames.keepRevision(id, { baseVersion: current.version }).catch(() => undefined) : Promise.resolve();
+    void kept.then(() => saving.schedule(0));
   }
 
   function dismissSummary(): void {
@@ -323,6 +357,7 @@ export const useDocumentStore = defineStore('document', () => {
     saving,
     open,
     close,
+    keepRevision,
     apply,
     edit,
     undo,

@@ -13,7 +13,7 @@ export type ReportRequest = {
   /** Increases with every document the editor applies; answers carry it back so stale ones can be told apart. */
   revision: number;
   doc: FrameDocument;
-  /** A frame was opened: forget the last report (its part marks belong to another frame). */
+  /** A frame was opened: forget the last report (it belongs to another frame). */
   reset: boolean;
   /** Also say which parts the change kept, re-cut or added (a re-lay's summary). */
   summarise: boolean;
@@ -23,7 +23,11 @@ export type ReportReply =
   | { type: 'report'; revision: number; report: FrameReport; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
   | { type: 'error'; revision: number; message: string; field: string | null };
 
-/** One engine per frame editor: part marks carry over from each report to the next, as the parts stay the same. */
+/**
+ * One engine per frame editor. Part marks come from the document alone (its pinned marks, then first appearance),
+ * exactly as the server's saw list and cutting view work them out, so the editor never shows a mark the shop's
+ * papers do not; the last report is kept only to say what a change did.
+ */
 export function createReportEngine(now: () => number = () => performance.now()): (req: ReportRequest) => ReportReply {
   let last: FrameReport | null = null;
   return (req) => {
@@ -31,7 +35,7 @@ export function createReportEngine(now: () => number = () => performance.now()):
     const t0 = now();
     try {
       // With the drawers', panels' and countertop's mass and hardware, as the shop documents have them.
-      const { report, goods } = reportWithSheetGoods(req.doc, last ? { previous: last } : {});
+      const { report, goods } = reportWithSheetGoods(req.doc);
       const scene = sceneFromReport(req.doc, report, goods);
       const changes = req.summarise && last ? diffReports(last, report) : null;
       last = report;
