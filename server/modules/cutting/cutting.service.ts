@@ -7,7 +7,7 @@ import type { CutSessionPlan, CuttingState } from '@shared/api/shop';
 import { diffReports } from '@shared/engine/diff';
 import { UnprocessableError } from '../../errors';
 import type { FrameEntity } from '../frames/frame.entity';
-import { frameReport, planFrame, supplierFor } from '../orders/frame-shop.service';
+import { frameReport, planFrame, shopSettingsFor, supplierFor } from '../orders/frame-shop.service';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { User } from '../users/user.entity';
 import { CutSession, type CutSessionEntity } from './cut-session.entity';
@@ -78,9 +78,10 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
 }
 
 /** Freezes the plan for the frame's current version (against the workshop's first supplier and the shelf). */
-export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, settings: { trim_mm: number; minOffcut_mm: number }): Promise<CutSessionEntity> {
+export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, asked: { trim_mm?: number; minOffcut_mm?: number }): Promise<CutSessionEntity> {
   const report = frameReport(frame);
   const supplier = await supplierFor(em, frame.project.workshop.id, undefined);
+  const settings = shopSettingsFor(report, asked);
   const planned = await planFrame(em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
   const plan: CutSessionPlan = {
     frameName: frame.name,
