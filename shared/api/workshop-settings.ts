@@ -88,5 +88,9 @@ export function withWorkshopDefaults(document: unknown, ws: WorkshopSettings): u
   const defaults = frameDefaults(ws);
   if (d.units !== undefined && typeof d.units !== 'object') return document;
   if (d.settings !== undefined && typeof d.settings !== 'object') return document;
-  return { ...d, units: { ...defaults.units, ...own(d.units) }, settings: { ...defaults.settings, ...own(d.settings) } };
+  // The workshop fills the settings a document leaves out; the profile to draw in only when it brings no settings at
+  // all, since a complete document without one means "the profile the frame uses most".
+  const settings = d.settings === undefined ? defaults.settings : { ...defaults.settings, defaultProfile: undefined, ...own(d.settings) };
+  if (settings.defaultProfile === undefined) delete settings.defaultProfile;
+  return { ...d, units: { ...defaults.units, ...own(d.units) }, settings };
 }
