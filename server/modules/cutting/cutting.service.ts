@@ -83,7 +83,7 @@ export async function startSession(em: EntityManager, frame: FrameEntity, userId
     plans: planned.plans,
     members: report.members.map((m) => ({ id: m.id, mark: m.mark, profile: m.profile, cut_length_mm: m.cut_length_mm })),
     settings,
-    units: report.units,
+    units: { display: report.units.display, frac: report.units.frac, mass: report.units.mass, date: report.units.date },
   };
   const s = em.create(CutSession, { frame, frameVersion: frame.version, plan, startedBy: em.getReference(User, userId) });
   await em.flush();
