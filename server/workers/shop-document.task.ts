@@ -28,7 +28,8 @@ export interface ShopDocumentInput {
   frozen: CutSessionPlan | null;
   offers: StockOffer[];
   shelf: ShelfOffcut[];
-  settings: { trim_mm: number; minOffcut_mm: number };
+  /** Asked for this document; left out, the frame's own trim and shortest offcut apply. */
+  settings: { trim_mm?: number; minOffcut_mm?: number };
   timeLimitMs: number;
   currency: string;
   cutFee: number;
@@ -51,12 +52,13 @@ const CSV = 'text/csv; charset=utf-8';
 
 export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocumentOutput> {
   const report = reportWithSheetGoods(parseFrameDocument(input.document)).report;
-  const meta: ShopMeta = { ...input.meta, units: input.meta.units ?? report.units };
+  const meta: ShopMeta = { ...input.meta, units: { ...report.units, ...input.meta.units } };
   const { doc, frozen } = input;
   let planned = null;
   if (needsPlan(doc, frozen !== null)) {
     if (report.cut_list.length === 0) throw new InputError('frame', 'This frame has no members to cut yet');
-    planned = await planShop(report, input.offers, input.shelf, input.settings, input.timeLimitMs);
+    const settings = { trim_mm: input.settings.trim_mm ?? report.settings.trim_mm, minOffcut_mm: input.settings.minOffcut_mm ?? report.settings.min_offcut_mm };
+    planned = await planShop(report, input.offers, input.shelf, settings, input.timeLimitMs);
   }
   const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
   switch (doc) {
@@ -71,7 +73,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
     case 'cut-list.csv':
       return { body: cutListCsv(cutList, meta.units), contentType: CSV, suffix: 'cut-list.csv' };
     case 'order-list.csv':
-      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee })), contentType: CSV, suffix: 'order-list.csv' };
+      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee }), meta.units), contentType: CSV, suffix: 'order-list.csv' };
     case 'sheet-plan.pdf':
       return { body: await sheetPlanPdf(frameSheetPlans(report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }

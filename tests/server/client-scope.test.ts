@@ -114,6 +114,9 @@ const REFUSED: Record<string, Call[]> = {
   'GET /api/attachments/:attachmentId': [['get', (i) => `/api/attachments/${i.unshared}`]],
   'PATCH /api/workshops/:workshopId': [['patch', (i) => `/api/workshops/${i.W}`, { name: 'Mine now' }]],
   'GET /api/workshops/:workshopId/members': [['get', (i) => `/api/workshops/${i.W}/members`]],
+  // A client is no member: the workshop's settings (its stock prices among them) are not theirs to read or change.
+  'GET /api/workshops/:workshopId/settings': [['get', (i) => `/api/workshops/${i.W}/settings`]],
+  'PUT /api/workshops/:workshopId/settings': [['put', (i) => `/api/workshops/${i.W}/settings`, {}]],
   'POST /api/workshops/:workshopId/members': [['post', (i) => `/api/workshops/${i.W}/members`, { email: 'x@y.test', role: 'owner' }]],
   'PATCH /api/workshops/:workshopId/members/:userId': [['patch', (i) => `/api/workshops/${i.W}/members/${i.me}`, { role: 'owner' }]],
   'DELETE /api/workshops/:workshopId/members/:userId': [['delete', (i) => `/api/workshops/${i.W}/members/${i.me}`]],

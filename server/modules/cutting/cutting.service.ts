@@ -10,7 +10,7 @@ import { diffReports } from '@shared/engine/diff';
 import type { FrameReport } from '@shared/engine/report';
 import { UnprocessableError } from '../../errors';
 import type { FrameEntity } from '../frames/frame.entity';
-import { frameReport, planFrame, supplierFor } from '../orders/frame-shop.service';
+import { frameReport, planFrame, shopSettingsFor, supplierFor } from '../orders/frame-shop.service';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { User } from '../users/user.entity';
 import { CutSession, type CutSessionEntity } from './cut-session.entity';
@@ -88,9 +88,10 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
 }
 
 /** Freezes the plan for the frame's current version (against the workshop's first supplier and the shelf). */
-export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, settings: { trim_mm: number; minOffcut_mm: number }): Promise<CutSessionEntity> {
+export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, asked: { trim_mm?: number; minOffcut_mm?: number }): Promise<CutSessionEntity> {
   const report = frameReport(frame);
   const supplier = await supplierFor(em, frame.project.workshop.id, undefined);
+  const settings = shopSettingsFor(report, asked);
   const planned = await planFrame(em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
   const plan: CutSessionPlan = {
     frameName: frame.name,
@@ -98,7 +99,7 @@ export async function startSession(em: EntityManager, frame: FrameEntity, userId
     plans: planned.plans,
     members: report.members.map((m) => ({ id: m.id, mark: m.mark, profile: m.profile, cut_length_mm: m.cut_length_mm })),
     settings,
-    units: report.units,
+    units: { display: report.units.display, frac: report.units.frac, mass: report.units.mass, date: report.units.date },
   };
   const s = em.create(CutSession, { frame, frameVersion: frame.version, plan, startedBy: em.getReference(User, userId) });
   await em.flush();

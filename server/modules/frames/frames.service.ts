@@ -19,7 +19,10 @@ import { NotFoundError, UnprocessableError, VersionConflictError } from '../../e
 import { binCutoff } from '../access/access.service';
 import { Project, type ProjectEntity } from '../projects/project.entity';
 import { User, type UserEntity } from '../users/user.entity';
-import { checkFrameDocument, emptyFrameDocument } from './frame-document';
+import { CURRENT_SCHEMA_VERSION } from '@shared/model/frame-document';
+import { withWorkshopDefaults } from '@shared/api/workshop-settings';
+import { workshopSettings } from '../workshops/workshop-settings.service';
+import { checkFrameDocument } from './frame-document';
 import { FrameRevision } from './frame-revision.entity';
 import { Frame, type FrameEntity } from './frame.entity';
 
@@ -73,7 +76,9 @@ export async function createFrame(
   userId: string,
   input: { name: string; document?: unknown },
 ): Promise<FrameDto> {
-  const { document, memberCount } = checkFrameDocument(input.document ?? emptyFrameDocument());
+  // A new frame reads and cuts as its workshop does, unless the document it came with says otherwise.
+  const ws = await workshopSettings(em, project.workshop.id);
+  const { document, memberCount } = checkFrameDocument(withWorkshopDefaults(input.document ?? { schemaVersion: CURRENT_SCHEMA_VERSION }, ws));
   const now = new Date();
   const frame = em.create(Frame, {
     project,

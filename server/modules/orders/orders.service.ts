@@ -101,7 +101,7 @@ export function orderPdf(o: OrderEntity, forSupplier = false): Promise<Buffer> {
 }
 
 export function orderCsv(o: OrderEntity): string {
-  return orderListCsv(o.contents.order);
+  return orderListCsv(o.contents.order, o.contents.meta.units);
 }
 
 /**
