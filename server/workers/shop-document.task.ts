@@ -11,12 +11,13 @@ import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
 import { planShop, type ShelfOffcut, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
-import { drillListPdf, labelsPdf, pickListPdf, sawListPdf } from '../pdf';
+import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../pdf';
+import { frameSheetPlans } from '../modules/orders/sheet-plans';
 
 // One shop document of a frame from what the database gave: the report, the plan when one is needed, and the
 // PDF or CSV. Runs in a worker thread; everything in and out is plain data.
 
-export const SHOP_DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv'] as const;
+export const SHOP_DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv', 'sheet-plan.pdf'] as const;
 export type ShopDoc = (typeof SHOP_DOCS)[number];
 
 export interface ShopDocumentInput {
@@ -71,5 +72,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
       return { body: cutListCsv(cutList, meta.units), contentType: CSV, suffix: 'cut-list.csv' };
     case 'order-list.csv':
       return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee })), contentType: CSV, suffix: 'order-list.csv' };
+    case 'sheet-plan.pdf':
+      return { body: await sheetPlanPdf(frameSheetPlans(report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }
 }
