@@ -42,14 +42,14 @@ describe('session touch', () => {
 
     for (let k = 0; k < 5; k++) {
       clock += 10_000;
-      await call((cb) => store.touch(sid, sessionData(new Date(t0.getTime() + clock)), cb));
+      await call((cb) => store.touch!(sid, sessionData(new Date(t0.getTime() + clock)), cb));
     }
     expect(updates).toEqual([]);
     expect(Math.abs((await expiryOf(sid)) - t0.getTime())).toBeLessThan(1000);
 
     clock += 60_000;
     const later = new Date(t0.getTime() + 7_200_000);
-    await call((cb) => store.touch(sid, sessionData(later), cb));
+    await call((cb) => store.touch!(sid, sessionData(later), cb));
     expect(updates).toHaveLength(1);
     expect(Math.abs((await expiryOf(sid)) - later.getTime())).toBeLessThan(1000);
 
@@ -63,8 +63,8 @@ describe('session touch', () => {
     await call((cb) => writer.set(sid, sessionData(new Date(Date.now() + 3_600_000)), cb));
     updates.length = 0;
     const later = new Date(Date.now() + 7_200_000);
-    await call((cb) => reader.touch(sid, sessionData(later), cb));
-    await call((cb) => reader.touch(sid, sessionData(later), cb));
+    await call((cb) => reader.touch!(sid, sessionData(later), cb));
+    await call((cb) => reader.touch!(sid, sessionData(later), cb));
     expect(updates).toHaveLength(1);
     expect(Math.abs((await expiryOf(sid)) - later.getTime())).toBeLessThan(1000);
     await call((cb) => writer.destroy(sid, cb));
