@@ -105,7 +105,8 @@ export const useDocumentStore = defineStore('document', () => {
     report.value = a.report;
     engineMs.value = a.ms;
     engineError.value = null;
-    checking.value = false;
+    // An edit made while this report waited to be read has its own on the way.
+    checking.value = reports.busy();
     if (summaryLabel?.revision === a.revision && a.changes) summary.value = { label: summaryLabel.label, changes: a.changes };
     summaryLabel = null;
   }
