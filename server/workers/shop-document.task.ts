@@ -1,5 +1,5 @@
 import type { CutSessionPlan } from '@shared/api/shop';
-import { computeReport } from '@shared/engine/report';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { InputError } from '@shared/errors';
 import { parseFrameDocument } from '@shared/model/parse';
 import { cutListCsv, orderListCsv } from '@shared/shop/csv-export';
@@ -50,7 +50,7 @@ const PDF = 'application/pdf';
 const CSV = 'text/csv; charset=utf-8';
 
 export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocumentOutput> {
-  const report = computeReport(parseFrameDocument(input.document));
+  const report = reportWithSheetGoods(parseFrameDocument(input.document)).report;
   const meta: ShopMeta = { ...input.meta, units: input.meta.units ?? report.units };
   const { doc, frozen } = input;
   let planned = null;

@@ -7,6 +7,7 @@ import { emptyScene, type Scene } from '@shared/editing/scene';
 import { sceneFromDocument } from '@shared/editing/scene-from-document';
 import type { WhatChanged } from '@shared/engine/diff';
 import type { FrameReport } from '@shared/engine/report';
+import type { SheetGoods } from '@shared/panels/sheet-goods';
 import { InputError } from '@shared/errors';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
@@ -56,6 +57,8 @@ export const useDocumentStore = defineStore('document', () => {
   const doc = shallowRef<FrameDocument | null>(null);
   const report = shallowRef<FrameReport | null>(null);
   const scene = shallowRef<Scene>(emptyScene());
+  /** The drawers, faces, panels and countertop the report sized, with their parts by material. */
+  const goods = shallowRef<SheetGoods | null>(null);
   /** The document could not be read at all (it was saved by a newer build, or damaged). */
   const loadError = ref<string | null>(null);
   const readOnly = ref(true);
@@ -94,6 +97,7 @@ export const useDocumentStore = defineStore('document', () => {
   let arriving: { answer: ReportAnswer; cancel: () => void } | null = null;
   function onReport(a: ReportAnswer): void {
     scene.value = a.scene;
+    goods.value = a.goods;
     keepSelectionValid(a.scene);
     arriving?.cancel();
     arriving = { answer: a, cancel: whenIdle(takeReport) };
@@ -146,6 +150,7 @@ export const useDocumentStore = defineStore('document', () => {
     summary.value = null;
     refusal.value = null;
     report.value = null;
+    goods.value = null;
     engineError.value = null;
     summaryLabel = null;
     dropArriving();
@@ -184,6 +189,7 @@ export const useDocumentStore = defineStore('document', () => {
     frameId.value = null;
     doc.value = null;
     report.value = null;
+    goods.value = null;
     reports.cancel();
     dropArriving();
     checking.value = false;
@@ -329,6 +335,7 @@ export const useDocumentStore = defineStore('document', () => {
     frameId,
     doc,
     report,
+    goods,
     scene,
     loadError,
     readOnly,

@@ -118,3 +118,16 @@ export async function pickMember(page: Page, id: string): Promise<void> {
 export async function fieldValue(page: Page, testid: string): Promise<string> {
   return page.getByTestId(testid).locator('input').inputValue();
 }
+
+/** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
+export async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
+  await page.getByRole('tab', { name: /^Loads/ }).click();
+  const list = page.getByRole('list', { name: 'What each module bears on' });
+  await list.waitFor();
+  const out = new Map<string, string[]>();
+  for (const item of await list.locator(':scope > li').all()) {
+    const name = (await item.getByTestId('bearing-module').innerText()).trim();
+    out.set(name, (await item.locator('li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim()));
+  }
+  return out;
+}

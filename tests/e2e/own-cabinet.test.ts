@@ -6,25 +6,12 @@ import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
-import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
+import { bearingByModule, cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
 
 // A builder with a brand-new account (signed up here, no demo data) lays out their own cabinet, reads its loads,
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
 
 const stamp = Date.now().toString(36);
-
-/** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
-async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
-  await page.getByRole('tab', { name: /^Loads/ }).click();
-  const list = page.getByRole('list', { name: 'What each module bears on' });
-  await list.waitFor();
-  const out = new Map<string, string[]>();
-  for (const item of await list.locator(':scope > li').all()) {
-    const name = (await item.getByTestId('bearing-module').innerText()).trim();
-    out.set(name, (await item.locator('li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim()));
-  }
-  return out;
-}
 
 describe('a builder lays out and re-lays their own cabinet from an empty account', () => {
   let page: Page;
