@@ -17,6 +17,16 @@ import { dropDraft, keepDraft, loadDraft } from './conflict-drafts';
 import { useDocumentSaving } from './document-saving';
 import { useNoticesStore } from './notices';
 
+/** Runs `f` when the page is idle (or after 100 ms at the latest); returns a cancel. */
+function whenIdle(f: () => void): () => void {
+  if (typeof requestIdleCallback === 'function') {
+    const id = requestIdleCallback(f, { timeout: 100 });
+    return () => cancelIdleCallback(id);
+  }
+  const id = setTimeout(f, 0);
+  return () => clearTimeout(id);
+}
+
 export type Selection = { members: readonly string[]; modules: readonly string[] };
 const NOTHING: Selection = { members: [], modules: [] };
 
@@ -84,18 +94,36 @@ export const useDocumentStore = defineStore('document', () => {
     },
   });
 
+  // The scene an answer brings (marks, load colours) is drawn at once; its report, which on a large frame takes a
+  // while to read, is taken when the page next has a moment, so the drawing is painted first.
+  let arriving: { answer: ReportAnswer; cancel: () => void } | null = null;
   function onReport(a: ReportAnswer): void {
-    report.value = a.report;
     scene.value = a.scene;
     goods.value = a.goods;
+    keepSelectionValid(a.scene);
+    arriving?.cancel();
+    arriving = { answer: a, cancel: whenIdle(takeReport) };
+  }
+  function takeReport(): void {
+    const a = arriving?.answer;
+    arriving = null;
+    if (!a) return;
+    report.value = a.report;
     engineMs.value = a.ms;
     engineError.value = null;
-    checking.value = false;
+    // An edit made while this report waited to be read has its own on the way.
+    checking.value = reports.busy();
     if (summaryLabel?.revision === a.revision && a.changes) summary.value = { label: summaryLabel.label, changes: a.changes };
     summaryLabel = null;
-    keepSelectionValid(a.scene);
+  }
+  function dropArriving(): void {
+    arriving?.cancel();
+    arriving = null;
   }
   function onEngineError(f: ReportFailure): void {
+    // A report still to be taken is on an earlier document: it is the last one that could be checked.
+    arriving?.cancel();
+    takeReport();
     engineError.value = { message: f.message, field: f.field };
     checking.value = false;
     summaryLabel = null;
@@ -127,6 +155,7 @@ export const useDocumentStore = defineStore('document', () => {
     goods.value = null;
     engineError.value = null;
     summaryLabel = null;
+    dropArriving();
     readOnly.value = !canWrite;
     try {
       const parsed = parseFrameDocument(frame.document);
@@ -191,6 +220,7 @@ export const useDocumentStore = defineStore('document', () => {
     report.value = null;
     goods.value = null;
     reports.cancel();
+    dropArriving();
     checking.value = false;
     engineError.value = null;
     scene.value = emptyScene();

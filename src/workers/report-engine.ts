@@ -19,8 +19,13 @@ export type ReportRequest = {
   summarise: boolean;
 };
 
+/**
+ * The report travels as JSON text: copying one string to the editor's thread is quick, where rebuilding the
+ * object graph of a large frame's report (megabytes) there took most of an edit's budget; the editor reads it
+ * when it has a moment (see report-client.ts). The scene, which the drawing needs at once, travels as it is.
+ */
 export type ReportReply =
-  | { type: 'report'; revision: number; report: FrameReport; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
+  | { type: 'report'; revision: number; reportJson: string; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
   | { type: 'error'; revision: number; message: string; field: string | null };
 
 /**
@@ -39,7 +44,7 @@ export function createReportEngine(now: () => number = () => performance.now()):
       const scene = sceneFromReport(req.doc, report, goods);
       const changes = req.summarise && last ? diffReports(last, report) : null;
       last = report;
-      return { type: 'report', revision: req.revision, report, scene, goods, ms: now() - t0, changes };
+      return { type: 'report', revision: req.revision, reportJson: JSON.stringify(report), scene, goods, ms: now() - t0, changes };
     } catch (e) {
       return { type: 'error', revision: req.revision, message: e instanceof Error ? e.message : String(e), field: e instanceof InputError ? e.field : null };
     }
