@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { computeReport } from '@shared/engine/report';
+import type { FrameReport } from '@shared/engine/report';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { demoFrameDocument } from '@shared/model/demo-frame';
 import { createReportEngine } from '@/workers/report-engine';
 import { resizeModule } from '../../shared/engine/relay-helpers';
@@ -14,9 +15,11 @@ describe('the editor’s report engine', () => {
     steps.forEach((d, i) => {
       const reply = engine({ revision: i + 1, doc: d, reset: i === 0, summarise: true });
       if (reply.type !== 'report') throw new Error(reply.message);
-      const server = computeReport(d);
-      expect(reply.report.members.map((m) => [m.id, m.mark])).toEqual(server.members.map((m) => [m.id, m.mark]));
-      expect(reply.report.cut_list.map((l) => [l.mark, l.cut_length_mm])).toEqual(server.cut_list.map((l) => [l.mark, l.cut_length_mm]));
+      // The shop documents' report: the frame with its drawers, panels and countertop.
+      const server = reportWithSheetGoods(d).report;
+      const report = JSON.parse(reply.reportJson) as FrameReport;
+      expect(report.members.map((m) => [m.id, m.mark])).toEqual(server.members.map((m) => [m.id, m.mark]));
+      expect(report.cut_list.map((l) => [l.mark, l.cut_length_mm])).toEqual(server.cut_list.map((l) => [l.mark, l.cut_length_mm]));
     });
   });
 
