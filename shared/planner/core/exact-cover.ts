@@ -137,8 +137,10 @@ export function exactCoverPack(
     restartAt = nodes + budget;
     chosen.length = 0;
     rem.set(Array.from(demand));
-    if (search() === true) {
-      found = true;
+    const r = search();
+    // A search that ends within its budget has tried every choice: there is no cover among these subsets.
+    if (r !== null) {
+      found = r;
       break;
     }
     for (const list of setsOf) {
