@@ -14,6 +14,7 @@ import { createSessionStore, sessionMiddleware } from './http/session';
 import { authRouter } from './modules/auth/auth.routes';
 import { framesRouter } from './modules/frames/frames.routes';
 import { createHealthPool, healthRouter } from './modules/health/health.routes';
+import { projectFileRouter } from './modules/projects/project-file.routes';
 import { projectsRouter } from './modules/projects/projects.routes';
 import { workshopsRouter } from './modules/workshops/workshops.routes';
 import { attachmentsRouter } from './modules/attachments/attachments.routes';
@@ -26,6 +27,7 @@ import { plannerRouter } from './modules/planner/planner.routes';
 import { invitationsRouter } from './modules/invitations/invitations.routes';
 import { sharingRouter } from './modules/sharing/sharing.routes';
 import { activityRouter } from './modules/activity/activity.routes';
+import { binRouter } from './modules/bin/bin.routes';
 import { WorkerPool } from './workers/pool';
 
 export interface Services {
@@ -125,6 +127,7 @@ export function createApp(services: Services): Express {
   api.use(authRouter(orm, config));
   api.use(workshopsRouter(orm));
   api.use(projectsRouter(orm));
+  api.use(projectFileRouter(orm, workers));
   api.use(framesRouter(orm));
   api.use(suppliersRouter(orm));
   api.use(ordersRouter(orm, config));
@@ -136,6 +139,7 @@ export function createApp(services: Services): Express {
   api.use(invitationsRouter(orm, config));
   api.use(sharingRouter(orm, config));
   api.use(activityRouter(orm));
+  api.use(binRouter(orm));
   api.use((req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 

@@ -4,6 +4,7 @@ import { ConfigError, loadConfig } from './config';
 import { createOrm, createSessionPool } from './db';
 import { createSessionStore } from './http/session';
 import { WorkerPool } from './workers/pool';
+import { scheduleBinPurge } from './modules/bin/bin.routes';
 
 // Listen, and on SIGINT/SIGTERM stop taking connections, let requests in flight finish, then close the
 // session store, its pool and the ORM, so no transaction is left half-done.
@@ -30,6 +31,8 @@ async function main(): Promise<void> {
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.port;
   console.log(`Slotwright API listening on http://${config.host}:${port}/api`);
+  // The bin's 30 days are also checked whenever it is opened; this catches a bin nobody opens.
+  const stopPurge = scheduleBinPurge(orm, 6 * 60 * 60 * 1000, (err) => console.error('Bin purge failed:', err instanceof Error ? err.message : err));
 
   let closing = false;
   const shutdown = async (signal: string) => {
@@ -41,6 +44,7 @@ async function main(): Promise<void> {
     server.closeIdleConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     clearTimeout(force);
+    stopPurge();
     (sessionStore as typeof sessionStore & { close?: () => void }).close?.();
     await workers.close();
     await disposeApp(app);

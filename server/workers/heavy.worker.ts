@@ -2,15 +2,17 @@ import { InputError } from '@shared/errors';
 import { planCuts } from '@shared/planner';
 import { ensureMipSolver } from '../modules/orders/mip';
 import type { CutJob } from '@shared/planner/job';
+import { readProjectFile } from './project-file.task';
 import { shopDocument, type ShopDocumentInput } from './shop-document.task';
 
 // The worker threads' entry: CPU-heavy tasks that would otherwise hold the event loop (the stock planner,
-// reports behind shop documents, pdfmake). An InputError is sent back as data, since a worker's errors lose
-// their class on the way to the main thread.
+// reports behind shop documents, pdfmake, reading project files). An InputError is sent back as data, since a
+// worker's errors lose their class on the way to the main thread.
 
 export type HeavyTask =
   | { task: 'plan'; job: CutJob; timeLimitMs?: number }
-  | { task: 'shopDocument'; input: ShopDocumentInput };
+  | { task: 'shopDocument'; input: ShopDocumentInput }
+  | { task: 'readProjectFile'; bytes: Uint8Array };
 
 export type HeavyResult<T = unknown> = { ok: true; value: T } | { ok: false; field: string; message: string };
 
@@ -23,6 +25,8 @@ export default async function run(t: HeavyTask): Promise<HeavyResult> {
         return { ok: true, value: await planCuts(t.job, { timeLimitMs: t.timeLimitMs }) };
       case 'shopDocument':
         return { ok: true, value: await shopDocument(t.input) };
+      case 'readProjectFile':
+        return { ok: true, value: readProjectFile(t.bytes) };
     }
   } catch (err) {
     if (err instanceof InputError) return { ok: false, field: err.field, message: err.message };

@@ -1,5 +1,5 @@
 import type { CutSessionPlan } from '@shared/api/shop';
-import { computeReport } from '@shared/engine/report';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { InputError } from '@shared/errors';
 import { parseFrameDocument } from '@shared/model/parse';
 import { cutListCsv, orderListCsv } from '@shared/shop/csv-export';
@@ -11,12 +11,13 @@ import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
 import { planShop, type ShelfOffcut, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
-import { drillListPdf, labelsPdf, pickListPdf, sawListPdf } from '../pdf';
+import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../pdf';
+import { frameSheetPlans } from '../modules/orders/sheet-plans';
 
 // One shop document of a frame from what the database gave: the report, the plan when one is needed, and the
 // PDF or CSV. Runs in a worker thread; everything in and out is plain data.
 
-export const SHOP_DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv'] as const;
+export const SHOP_DOCS = ['saw-list.pdf', 'drill-list.pdf', 'pick-list.pdf', 'labels.pdf', 'cut-list.csv', 'order-list.csv', 'sheet-plan.pdf'] as const;
 export type ShopDoc = (typeof SHOP_DOCS)[number];
 
 export interface ShopDocumentInput {
@@ -49,7 +50,7 @@ const PDF = 'application/pdf';
 const CSV = 'text/csv; charset=utf-8';
 
 export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocumentOutput> {
-  const report = computeReport(parseFrameDocument(input.document));
+  const report = reportWithSheetGoods(parseFrameDocument(input.document)).report;
   const meta: ShopMeta = { ...input.meta, units: input.meta.units ?? report.units };
   const { doc, frozen } = input;
   let planned = null;
@@ -71,5 +72,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
       return { body: cutListCsv(cutList, meta.units), contentType: CSV, suffix: 'cut-list.csv' };
     case 'order-list.csv':
       return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee })), contentType: CSV, suffix: 'order-list.csv' };
+    case 'sheet-plan.pdf':
+      return { body: await sheetPlanPdf(frameSheetPlans(report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }
 }

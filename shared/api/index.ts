@@ -9,3 +9,4 @@ export * from './frames';
 export * from './invitations';
 export * from './sharing';
 export * from './activity';
+export * from './bin';

@@ -127,6 +127,22 @@ export function setEndJoin(doc: FrameDocument, id: string, which: 'start' | 'end
   };
 }
 
+/** Marks or clears one end of a member as bolted to the vehicle's wall. */
+export function setWallFixing(doc: FrameDocument, id: string, which: 'start' | 'end', fixed: boolean): FrameDocument {
+  return {
+    ...doc,
+    members: replaceById(doc.members, id, (m) => {
+      const ends = new Set(m.wallFixing === 'both' ? ['start', 'end'] : m.wallFixing ? [m.wallFixing] : []);
+      if (fixed) ends.add(which);
+      else ends.delete(which);
+      const { wallFixing: _old, ...rest } = m;
+      void _old;
+      if (ends.size === 0) return rest;
+      return { ...rest, wallFixing: ends.size === 2 ? 'both' : ([...ends][0] as 'start' | 'end') };
+    }),
+  };
+}
+
 export type NewMember = {
   axis: Axis;
   profile: string;

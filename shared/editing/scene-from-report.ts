@@ -6,17 +6,18 @@ import { resolveMembers } from '../engine/resolve-members';
 import type { Vec3 } from '../model/axis';
 import type { FrameDocument } from '../model/frame-document';
 import { InputError } from '../errors';
-import { sheetGoods } from '../panels/sheet-goods';
+import { sheetGoods, type GoodsBox, type SheetGoods } from '../panels/sheet-goods';
 import { boundsOf, type Scene, type SceneBay, type SceneGoods, type SceneMember, type SceneModule } from './scene';
 
 const toBox = (min: Vec3, max: Vec3): Box => ({ min: [min.x, min.y, min.z], max: [max.x, max.y, max.z] });
+const toSceneGoods = (b: GoodsBox): SceneGoods => ({ id: b.id, kind: b.kind, box: toBox(b.min_mm, b.max_mm) });
 
 /**
  * The editor's scene from the engine's report. The report gives each member as cut; end handles and snapping also
  * need where the references put it before joints, which the engine's own resolver gives (called here, not
  * re-implemented).
  */
-export function sceneFromReport(doc: FrameDocument, report: FrameReport): Scene {
+export function sceneFromReport(doc: FrameDocument, report: FrameReport, sheetGoodsOf?: SheetGoods | null): Scene {
   const profileOf = profileTable(doc);
   const datums = resolveDatums(doc);
   const drawn = resolveMembers(doc, datums, profileOf);
@@ -64,7 +65,7 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport): Scene 
     members,
     modules,
     bays,
-    goods: goodsOf(report),
+    goods: sheetGoodsOf === undefined ? goodsOf(report) : (sheetGoodsOf?.boxes ?? []).map(toSceneGoods),
     bounds: boundsOf([...members.map((m) => m.box), ...modules.map((m) => m.box)]),
     cog: report.mass.cog_mm,
   };
@@ -74,7 +75,7 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport): Scene 
 function goodsOf(report: FrameReport): SceneGoods[] {
   if (!report.bays.length) return [];
   try {
-    return sheetGoods(report).boxes.map((b) => ({ id: b.id, kind: b.kind, box: toBox(b.min_mm, b.max_mm) }));
+    return sheetGoods(report).boxes.map(toSceneGoods);
   } catch (err) {
     if (err instanceof InputError) return [];
     throw err;

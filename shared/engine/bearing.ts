@@ -2,6 +2,7 @@ import { crossAxes, type Axis } from '../model/axis';
 import { DEFAULT_SIDE_GAP_MM, moduleLabel, type Bearing } from '../model/module';
 import { ai, overlapOn, type Box } from './box';
 import { faceName, type FaceName } from './faces';
+import { memberRef } from './names';
 import type { ModuleGeometry } from './resolve-modules';
 import type { MemberGeometry } from './resolve-members';
 import type { ReportWarning } from './warnings';
@@ -41,12 +42,7 @@ const FIX: Readonly<Record<Bearing, string>> = {
   'side-rails': 'put it between two rails, one each side, or choose “sits on” if it stands on the rails below',
 };
 
-/** A member as the builder knows it: the name they gave it, else its kind of member. */
-function memberLabel(m: MemberGeometry): string {
-  const name = m.member.name?.trim();
-  if (name) return `“${name}”`;
-  return m.axis === 'z' ? 'an upright' : m.axis === 'x' ? 'a rail' : 'a cross-member';
-}
+const memberLabel = (m: MemberGeometry): string => memberRef(m.member.id);
 
 function contactOn(mod: Box, m: MemberGeometry, box: Box, face: FaceName): BearingContact {
   const a = ai(m.axis);

@@ -1,5 +1,6 @@
 import { moduleLabel } from '../model/module';
 import { overlapOn, type Box } from './box';
+import { memberRef } from './names';
 import type { MemberGeometry } from './resolve-members';
 import type { ModuleGeometry } from './resolve-modules';
 import type { ReportWarning } from './warnings';
@@ -12,11 +13,7 @@ const CLASH_MM = 1;
 
 const depth = (a: Box, b: Box) => Math.min(overlapOn(a, b, 0), overlapOn(a, b, 1), overlapOn(a, b, 2));
 
-function memberWords(m: MemberGeometry): string {
-  const name = m.member.name?.trim();
-  if (name) return `“${name}”`;
-  return m.axis === 'z' ? 'an upright' : m.axis === 'x' ? 'a rail' : 'a cross-member';
-}
+const memberWords = (m: MemberGeometry): string => memberRef(m.member.id);
 
 /**
  * Modules that run into a rail or cross-member or into another module: a stack taller than the room under the

@@ -1,8 +1,9 @@
 import type { JointsResult } from './joints';
 import type { MemberGeometry } from './resolve-members';
+import { memberRef } from './names';
 import type { ReportWarning } from './warnings';
 
-const memberLabel = (m: MemberGeometry) => (m.member.name ? `${m.member.name} (${m.member.id})` : m.member.id);
+const memberLabel = (m: MemberGeometry) => memberRef(m.member.id);
 
 /**
  * Members that cannot be what was meant: one that touches no other member (nothing holds it, it holds nothing),
@@ -37,7 +38,8 @@ export function frameWarnings(members: readonly MemberGeometry[], joints: Pick<J
     warnings.push({
       code: 'member-duplicate',
       member_id: m.member.id,
-      message: `${memberLabel(m)} lies exactly where ${memberLabel(first)} is, with the same profile: the part is counted twice in the cut list and the mass; delete one of them`,
+      member_ids: [m.member.id, first.member.id],
+      message: `${memberLabel(m)} is drawn twice in the same place with the same profile: the part is counted twice in the cut list and the mass; delete one of the two`,
     });
   }
   return warnings;

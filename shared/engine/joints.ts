@@ -4,6 +4,7 @@ import { roleOf } from '../model/member';
 import { ai, cloneBox, overlapOn, type Box } from './box';
 import { fitsFreeEnd, fitsJoint, type MethodDef } from './join-methods';
 import type { MemberGeometry } from './resolve-members';
+import { lowerFirst, memberRef } from './names';
 import { SpatialHash } from './spatial-hash';
 import type { ReportWarning } from './warnings';
 
@@ -145,6 +146,7 @@ export function findJoints(
   const endJoint: (number | null)[][] = members.map(() => [null, null]);
   const taken = new Set<string>();
   const e = (end: EndName) => (end === 'start' ? 0 : 1);
+  const methodName = (id: string) => lowerFirst(methods.get(id)?.name ?? 'a join method this frame does not define');
 
   const defaultJoin = fitsJoint(methods.get(doc.settings.defaultJoin)) ? doc.settings.defaultJoin : 'corner-bracket';
   const jointMethod = (i: number, end: EndName, fallback = defaultJoin): string => {
@@ -154,7 +156,7 @@ export function findJoints(
     warnings.push({
       code: 'joint-method-not-for-joints',
       member_id: members[i].member.id,
-      message: `${members[i].member.id} ${end}: "${wanted}" is for free ends; this end butts against another member, so ${fallback} is used`,
+      message: `${memberRef(members[i].member.id)}, ${end} end: ${methodName(wanted)} is for free ends and this end butts against another member, so ${methodName(fallback)} is used; choose a join method for that end`,
     });
     return fallback;
   };
@@ -174,7 +176,7 @@ export function findJoints(
       const n = members[c.other];
       const key = pairKey(m.member.id, n.member.id);
       if (taken.has(key)) {
-        warnings.push({ code: 'end-shared', member_id: m.member.id, message: `${m.member.id} ${end}: already joined to ${n.member.id} elsewhere; this end is left free` });
+        warnings.push({ code: 'end-shared', member_id: m.member.id, message: `${memberRef(m.member.id)}, ${end} end: already joined to ${memberRef(n.member.id)} elsewhere, so this end is left free; move it so it meets a member it is not yet joined to` });
         continue;
       }
       const back = c.otherEnd ? contacts[c.other][e(c.otherEnd)] : null;
@@ -182,7 +184,7 @@ export function findJoints(
       const setting = throughSetting.get(key);
       if (c.kind === 'inline') {
         if (!mutual || endJoint[c.other][e(c.otherEnd as EndName)] !== null) {
-          warnings.push({ code: 'inline-one-sided', member_id: m.member.id, message: `${m.member.id} ${end}: touches the end of ${n.member.id}, which is joined elsewhere; this end is left free` });
+          warnings.push({ code: 'inline-one-sided', member_id: m.member.id, message: `${memberRef(m.member.id)}, ${end} end: touches the end of ${memberRef(n.member.id)}, which is joined elsewhere, so this end is left free; join the two ends to each other or move one of them` });
           continue;
         }
         // A splice is plated unless either end names its own method.
@@ -223,8 +225,8 @@ export function findJoints(
           code: 'through-not-possible',
           member_id: m.member.id,
           message: corner
-            ? `${m.member.id} cannot run through ${n.member.id}: ${n.member.id} already runs through another member at this corner`
-            : `${m.member.id} cannot run through ${n.member.id}: it meets ${n.member.id} part-way along, so it butts`,
+            ? `${memberRef(m.member.id)} cannot run through ${memberRef(n.member.id)}: that one already runs through another member at this corner; choose which one runs through there instead`
+            : `${memberRef(m.member.id)} cannot run through ${memberRef(n.member.id)}: it meets it part-way along, so it butts; clear that choice, or move it to meet the other's end`,
         });
       }
       add({
@@ -278,7 +280,7 @@ export function findJoints(
           warnings.push({
             code: 'free-end-with-joint-method',
             member_id: m.member.id,
-            message: `${m.member.id} ${end}: set to join by ${wanted} but touches no other member; an end cap is listed instead`,
+            message: `${memberRef(m.member.id)}, ${end} end: set to join by ${methodName(wanted)} but touches no other member, so an end cap is listed instead; move the end onto a member or choose an end treatment`,
           });
         }
       }

@@ -8,10 +8,11 @@ import type { JointsResult } from './joints';
 import { loadCases, type LoadCase } from './load-cases';
 import { beamMemo, checkMember, memberStatics, SAME_POINT_MM, type MemberCheck, type MemberLoad, type Support } from './member-checks';
 import type { ModuleBearing } from './bearing';
-import { DEFAULT_MOUNT_POINTS } from '../model/module';
+import { DEFAULT_MOUNT_POINTS, moduleLabel } from '../model/module';
 import type { ModuleGeometry } from './resolve-modules';
 import type { MemberGeometry } from './resolve-members';
-import { linearReactions, rigidBodyReactions, type RestPoint } from './statics';
+import { linearReactions, safeSideReactions, type RestPoint } from './statics';
+import { lowerFirst, memberRef } from './names';
 import type { FaceName } from './faces';
 import type { ReportWarning } from './warnings';
 
@@ -42,10 +43,44 @@ export type ColumnCheck = ColumnResult & {
   buckling_class: 'A' | 'B';
 };
 
-export type FixingPoint = { member: number; at: { x: number; y: number; z: number }; vertical_N: number; horizontal_N: number };
+export type FixingPoint = { member: number; kind: 'floor' | 'wall'; at: { x: number; y: number; z: number }; vertical_N: number; horizontal_N: number };
 export type CaseFixings = { case: string; points: FixingPoint[]; horizontal_N: number; vertical_N: number };
 
-export type GoverningCheck = MemberCheck & { case: string; self_weight_N: number };
+/**
+ * A member pushed sideways by braking or cornering: the inertia of what it carries and of itself, across it, bending
+ * it about its other axis between the same supports. Combined with the vertical bending of the same case on the
+ * safe side: the two stress ratios added (their peaks may sit at different corners and places), the deflections
+ * added as vectors of their largest values.
+ */
+export type LateralCheck = {
+  load_N: number;
+  bending_axis: 'x' | 'y';
+  deflection_mm: number;
+  stress_MPa: number;
+  utilisation: number;
+  combined_utilisation: number;
+  governing: 'deflection' | 'stress';
+};
+
+export type GoverningCheck = MemberCheck & { case: string; self_weight_N: number; lateral: LateralCheck | null };
+
+function lateralCheck(v: MemberCheck, h: MemberCheck): LateralCheck | null {
+  if (h.utilisation === null || h.spans.length === 0) return null;
+  const ratio = (c: MemberCheck, f: (s: MemberCheck['spans'][number]) => number) => Math.max(0, ...c.spans.map(f));
+  const d = (s: MemberCheck['spans'][number]) => s.deflection_mm / s.limit_mm;
+  const st = (s: MemberCheck['spans'][number]) => s.stress_MPa / s.allowable_MPa;
+  const dc = Math.hypot(ratio(v, d), ratio(h, d));
+  const sc = ratio(v, st) + ratio(h, st);
+  return {
+    load_N: h.load_N,
+    bending_axis: h.bending_axis,
+    deflection_mm: Math.max(...h.spans.map((s) => s.deflection_mm)),
+    stress_MPa: Math.max(...h.spans.map((s) => s.stress_MPa)),
+    utilisation: h.utilisation,
+    combined_utilisation: Math.max(dc, sc),
+    governing: dc >= sc ? 'deflection' : 'stress',
+  };
+}
 
 export type LoadsResult = {
   modules: ModuleLoad[];
@@ -65,7 +100,6 @@ const STRIPS = 8;
 
 type Rest = RestPoint & { contact: number; member: number; from: number; to: number };
 
-const label = (name: string | undefined, id: string) => (name ? `${name} (${id})` : id);
 
 /**
  * Where each module rests, in plan: every contact cut into strips (a base or side-rail module presses along the
@@ -160,6 +194,9 @@ export function checkLoads(
   const vertical = (i: number) => members[i].axis === 'z';
   const centreZ = (b: Box) => (b.min[2] + b.max[2]) / 2;
   const selfWeight = members.map((m, i) => (m.info.section.mass_kg_per_m / 1000) * STANDARD_GRAVITY * lengthOf(i));
+  // The same member turned a quarter: it bends about its other axis, as under a load across it.
+  const turned = members.map((m) => ({ ...m, member: { ...m.member, rotation_deg: ((m.member.rotation_deg + 90) % 360) as 0 | 90 | 180 | 270 } }));
+  const sideways = (i: number): MemberGeometry => turned[i];
 
   // Supports of horizontal members; where an upright's load goes.
   const supports: Support[][] = members.map(() => []);
@@ -194,7 +231,10 @@ export function checkLoads(
         warnings.push({
           code: 'load-cycle',
           member_id: members[i].member.id,
-          message: `${members[i].member.id} and ${members[t].member.id} hold each other up; load from ${members[i].member.id} to ${members[t].member.id} is not followed`,
+          member_ids: [members[i].member.id, members[t].member.id],
+          message:
+            `${memberRef(members[i].member.id)} and ${memberRef(members[t].member.id)} hold each other up, so the load from the first to the second is not followed: ` +
+            'put an upright under one of them or let one run through the other',
         });
       } else if (state[t] === 0) visit(t);
     }
@@ -223,6 +263,7 @@ export function checkLoads(
   const statics: ModuleStatics[] = [];
   const perCase = cases.map((lc) => {
     const pending: MemberLoad[][] = members.map(() => []);
+    const lateral: MemberLoad[][] = members.map(() => []);
     bearings.forEach((b, k) => {
       const g = modules[b.module];
       const W = g.mass_kg * STANDARD_GRAVITY * lc.vertical;
@@ -233,10 +274,20 @@ export function checkLoads(
         y: (box.min[1] + box.max[1]) / 2 + (lc.ay / lc.vertical) * lever,
       };
       const pts = rests[k];
-      const res = rigidBodyReactions(pts, W, at);
+      const bound = safeSideReactions(pts, W, at);
+      const res = { ...bound.equal, reactions: bound.reactions };
       // Only a module standing on its supports can tip off them; hangers and slides hold both ways.
       const tips = b.bearing === 'base' && res.tips ? { toward: res.tips.toward } : null;
       memberLoadsOf(pts, res.reactions, (member, l) => pending[member].push(l));
+      // Sideways, each member it bears on takes the module's whole inertia force across it (as if the others held
+      // nothing), spread over the stretch it touches.
+      b.contacts.forEach((c) => {
+        const a = members[c.member].axis === 'x' ? lc.ay : lc.ax;
+        if (a === 0) return;
+        const F = Math.abs(a) * g.mass_kg * STANDARD_GRAVITY;
+        const len = c.to_mm - c.from_mm;
+        lateral[c.member].push(len < SAME_POINT_MM ? { kind: 'point', P_N: F, x_mm: (c.from_mm + c.to_mm) / 2 } : { kind: 'udl', w_N_per_mm: F / len, from_mm: c.from_mm, to_mm: c.to_mm });
+      });
       const byContact = new Map<number, ModuleReaction & { m: number }>();
       pts.forEach((p, i) => {
         const r = byContact.get(p.contact) ?? { member: p.member, R_N: 0, x_mm: 0, m: 0 };
@@ -258,6 +309,8 @@ export function checkLoads(
     const axial = members.map(() => 0);
     const bounds: (number | null)[] = members.map(() => null);
     const finalLoads: (MemberLoad[] | null)[] = members.map(() => null);
+    const lateralLoads: (MemberLoad[] | null)[] = members.map(() => null);
+    const lateralBounds: (number | null)[] = members.map(() => null);
     const sendTo = (from: number, target: number | null, R: number, at: { x: number; y: number; z: number }) => {
       if (target === null || cut.has(`${from}>${target}`) || Math.abs(R) < 1e-9) return;
       if (vertical(target)) axial[target] += R;
@@ -273,6 +326,12 @@ export function checkLoads(
       const L = lengthOf(i);
       const loads = pending[i];
       if (selfWeight[i] > 0 && L >= SAME_POINT_MM) loads.push({ kind: 'udl', w_N_per_mm: (selfWeight[i] * lc.vertical) / L, from_mm: 0, to_mm: L });
+      const across = Math.abs(members[i].axis === 'x' ? lc.ay : lc.ax);
+      if (across > 0 && selfWeight[i] > 0 && L >= SAME_POINT_MM) lateral[i].push({ kind: 'udl', w_N_per_mm: (selfWeight[i] * across) / L, from_mm: 0, to_mm: L });
+      if (lateral[i].length > 0) {
+        lateralLoads[i] = lateral[i];
+        lateralBounds[i] = memberStatics(sideways(i), L, lateral[i], supports[i], { shockFactor, deflectionLimitN, safetyFactor }).bound;
+      }
       if (loads.length === 0) continue;
       const check = memberStatics(members[i], L, loads, supports[i], { shockFactor, deflectionLimitN, safetyFactor });
       bounds[i] = check.bound;
@@ -282,7 +341,7 @@ export function checkLoads(
         if (at) sendTo(i, s.target, check.reactions[k], at);
       });
     }
-    return { bounds, axial, finalLoads };
+    return { bounds, axial, finalLoads, lateralLoads, lateralBounds };
   });
 
   // The governing case of each member: its largest utilisation. Cases are solved in order of their upper bound
@@ -293,23 +352,26 @@ export function checkLoads(
   const full = { shockFactor, deflectionLimitN, safetyFactor };
   for (let i = 0; i < members.length; i++) {
     const ranked = perCase
-      .map((r, k) => ({ k, bound: r.bounds[i], loads: r.finalLoads[i] }))
+      .map((r, k) => ({ k, bound: (r.bounds[i] ?? 0) + (r.lateralBounds[i] ?? 0), loads: r.finalLoads[i], lateral: r.lateralLoads[i] }))
       .filter((r) => r.loads !== null)
-      .sort((p, q) => (q.bound ?? 0) - (p.bound ?? 0) || p.k - q.k);
+      .sort((p, q) => q.bound - p.bound || p.k - q.k);
     if (ranked.length === 0) continue;
-    let best: { c: MemberCheck; k: number } | null = null;
+    let best: { c: MemberCheck; k: number; u: number | null; lateral: LateralCheck | null } | null = null;
     for (const r of ranked) {
-      if (best !== null && (best.c.utilisation === null || (r.bound ?? 0) <= (best.c.utilisation as number))) break;
+      if (best !== null && (best.u === null || r.bound <= best.u)) break;
       const c = checkMember(memo, members[i], lengthOf(i), r.loads as MemberLoad[], supports[i], full).result;
-      if (best === null || (c.utilisation ?? -1) > (best.c.utilisation ?? -1)) best = { c, k: r.k };
+      const lat = r.lateral ? lateralCheck(c, checkMember(memo, sideways(i), lengthOf(i), r.lateral, supports[i], full).result) : null;
+      const u = c.utilisation === null ? null : Math.max(c.utilisation, lat?.combined_utilisation ?? 0);
+      if (best === null || (u ?? -1) > (best.u ?? -1)) best = { c, k: r.k, u, lateral: lat };
     }
-    const { c, k } = best as { c: MemberCheck; k: number };
-    checks.push({ ...c, case: cases[k].id, self_weight_N: selfWeight[i] });
+    const { c: vertical_, k, u, lateral: lat } = best as { c: MemberCheck; k: number; u: number | null; lateral: LateralCheck | null };
+    const c: MemberCheck = { ...vertical_, utilisation: u, governing: lat && u !== null && u > (vertical_.utilisation ?? 0) ? lat.governing : vertical_.governing };
+    checks.push({ ...c, case: cases[k].id, self_weight_N: selfWeight[i], lateral: lat });
     if (c.utilisation === null && (c.load_N > selfWeight[i] * cases[k].vertical * 1.000001 || moduleLoaded.has(i))) {
       warnings.push({
         code: 'member-unsupported',
         member_id: members[i].member.id,
-        message: `${members[i].member.id} carries load but nothing holds it up (no butting end, no upright under it); its load is not checked`,
+        message: `${memberRef(members[i].member.id)} carries load but nothing holds it up (no butting end, no upright under it), so its load is not checked: join it to an upright or put one under it`,
       });
     }
     const root = c.spans.find((s) => s.support === 'cantilever' && s.root !== null && supports[i].length === 1);
@@ -318,7 +380,7 @@ export function checkLoads(
         code: 'cantilever-joint',
         member_id: members[i].member.id,
         message:
-          `${members[i].member.id} is held at one end only: a ${Math.round(root.span_mm)} mm cantilever off its ${root.root?.method}. ` +
+          `${memberRef(members[i].member.id)} is held at one end only: a ${Math.round(root.span_mm)} mm cantilever off its ${lowerFirst(root.root?.method ?? 'joint')}. ` +
           `The member is checked as a cantilever, but the joint's capacity to hold it is not checked: add a second support (an upright or a brace under the free end)`,
       });
     }
@@ -346,11 +408,27 @@ export function checkLoads(
     columns.push({ ...r, member: i, axial_N: N, case: cases[k].id, K_reason: K.reason, I_mm4: I, area_mm2: s.area_mm2, fo_MPa: s.yield_MPa, buckling_class: cls });
   }
 
-  // What reaches the floor: the feet of the uprights (their lower end free), per case. The horizontal inertia of
-  // every mass, acting at its height above the floor, adds an overturning moment the feet resist by pushing and
-  // pulling; the horizontal force is shared equally among them.
+  // Where the frame is fixed to the vehicle, per case: the feet of the uprights (their lower end free) on the floor,
+  // and the member ends the builder marked as bolted to the wall. The horizontal inertia of every mass, acting at
+  // its height above the floor, adds an overturning moment. How the fixings share the load depends on how stiff
+  // each is, so each is given at least what it would take if the others were weaker: every fixing the whole
+  // horizontal force; the feet the weight and the overturning moment between them (pushing and pulling); each
+  // wall fixing the whole weight as well, and the whole overturning moment as a pull at its height.
   const feet = members.filter((m, i) => vertical(i) && joints.ends[i][0].role === 'free').map((m) => m.index);
-  const floorZ = feet.length ? Math.min(...feet.map((i) => eff[i].min[2])) : 0;
+  const floorZ = feet.length ? Math.min(...feet.map((i) => eff[i].min[2])) : Math.min(0, ...members.map((_, i) => eff[i].min[2]));
+  const wall: { member: number; at: { x: number; y: number; z: number } }[] = [];
+  members.forEach((m, i) => {
+    const w = m.member.wallFixing;
+    if (!w) return;
+    const a = ai(m.axis);
+    const c = { x: (eff[i].min[0] + eff[i].max[0]) / 2, y: (eff[i].min[1] + eff[i].max[1]) / 2, z: (eff[i].min[2] + eff[i].max[2]) / 2 };
+    for (const end of ['start', 'end'] as const) {
+      if (w !== 'both' && w !== end) continue;
+      const at = { ...c };
+      at[m.axis] = end === 'start' ? eff[i].min[a] : eff[i].max[a];
+      wall.push({ member: i, at });
+    }
+  });
   const masses: { m: number; z: number }[] = [
     ...members.map((m, i) => ({ m: selfWeight[i] / STANDARD_GRAVITY, z: centreZ(eff[i]) })),
     ...bearings.map((b, k) => ({ m: modules[b.module].mass_kg, z: planeZ[k] })),
@@ -358,6 +436,7 @@ export function checkLoads(
   const totalMass = masses.reduce((s, p) => s + p.m, 0);
   const fixings: CaseFixings[] = cases.map((lc, k) => {
     const H = totalMass * STANDARD_GRAVITY * Math.hypot(lc.ax, lc.ay);
+    const V = totalMass * STANDARD_GRAVITY * lc.vertical;
     const pts = feet.map((i) => ({ x: (eff[i].min[0] + eff[i].max[0]) / 2, y: (eff[i].min[1] + eff[i].max[1]) / 2, weight: 1 }));
     let tx = 0;
     let ty = 0;
@@ -373,14 +452,36 @@ export function checkLoads(
       const still = linearReactions(pts, 1, c).reactions;
       extra = moved.map((r, j) => r - still[j]);
     }
-    const points = feet.map((i, j) => ({
+    const T = Math.hypot(tx, ty);
+    const points: FixingPoint[] = feet.map((i, j) => ({
       member: i,
+      kind: 'floor',
       at: { x: pts[j].x, y: pts[j].y, z: eff[i].min[2] },
       vertical_N: perCase[k].axial[i] + extra[j],
-      horizontal_N: H / feet.length,
+      horizontal_N: H,
     }));
-    return { case: lc.id, points, horizontal_N: H, vertical_N: points.reduce((s, p) => s + p.vertical_N, 0) };
+    for (const w of wall) {
+      const h = w.at.z - floorZ;
+      // A fixing at the floor's own level cannot hold the frame from turning over: the feet must, as above.
+      const pull = h >= SAME_POINT_MM ? T / h : 0;
+      points.push({ member: w.member, kind: 'wall', at: w.at, vertical_N: V, horizontal_N: H + pull });
+    }
+    const floorV = points.filter((p) => p.kind === 'floor').reduce((s, p) => s + p.vertical_N, 0);
+    return { case: lc.id, points, horizontal_N: H, vertical_N: feet.length ? floorV : V };
   });
+
+  // Racking: braking and cornering push the frame over like a parallelogram; only braces stop that, and racking
+  // itself is not checked, so a frame without them that moves is warned about.
+  const horizontalCases = cases.filter((c) => c.ax !== 0 || c.ay !== 0);
+  if (horizontalCases.length > 0 && !braced && members.some((m) => m.axis === 'z')) {
+    const H = Math.max(...fixings.filter((f) => horizontalCases.some((c) => c.id === f.case)).map((f) => f.horizontal_N));
+    warnings.push({
+      code: 'frame-racking',
+      message:
+        `The frame has no diagonal braces: under braking and cornering (up to ${Math.round(H)} N sideways in all) it can lean over like a parallelogram, ` +
+        'and that racking is not checked. Add a diagonal brace in each wall of the frame, and fix it to the vehicle at the top as well as at the floor',
+    });
+  }
 
   // Modules: warnings from the statics, naming them as the user did.
   // A module that would tip under gravity and shock alone, or has no fixings, is an error; under braking or
@@ -391,7 +492,7 @@ export function checkLoads(
     if (!st.tips || told.has(st.module)) continue;
     const lc = cases.find((c) => c.id === st.case) as LoadCase;
     const fixed = (g.module.mounting?.points ?? DEFAULT_MOUNT_POINTS[g.module.bearing]) > 0;
-    const on = [...new Set(st.reactions.map((r) => members[r.member].member.id))].join(', ');
+    const on = [...new Set(st.reactions.map((r) => memberRef(members[r.member].member.id)))].join(', ');
     const pull = -st.reactions.reduce((sum, r) => sum + Math.min(r.R_N, 0), 0);
     if (lc.ax === 0 && lc.ay === 0) {
       told.add(st.module);
@@ -400,7 +501,7 @@ export function checkLoads(
         severity: 'error',
         module_id: g.module.id,
         message:
-          `${label(g.module.name, g.module.id)} tips off toward the ${st.tips.toward}: its centre of gravity is outside its supports (${on}), ` +
+          `${moduleLabel(g.module)} tips off toward the ${st.tips.toward}: its centre of gravity is outside its supports (${on}), ` +
           `so a support would have to pull${pull > 0 ? ` ${Math.round(pull)} N` : ''}. Move it, or add a member under that side`,
       });
     } else if (!fixed) {
@@ -409,7 +510,7 @@ export function checkLoads(
         code: 'module-tips',
         severity: 'error',
         module_id: g.module.id,
-        message: `${label(g.module.name, g.module.id)} tips off toward the ${st.tips.toward} under ${lc.name} and has no fixings: screw it down to ${on}`,
+        message: `${moduleLabel(g.module)} tips off toward the ${st.tips.toward} under ${lc.name} and has no fixings: screw it down to ${on}`,
       });
     } else if (!told.has(st.module)) {
       told.add(st.module);
@@ -417,8 +518,8 @@ export function checkLoads(
         code: 'module-held-down',
         module_id: g.module.id,
         message:
-          `${label(g.module.name, g.module.id)} would tip toward the ${st.tips.toward} under ${lc.name}: its fixings must hold it down` +
-          `${pull > 0 ? ` (about ${Math.round(pull)} N of pull)` : ''}; their capacity is not checked`,
+          `${moduleLabel(g.module)} would tip toward the ${st.tips.toward} under ${lc.name}: its fixings must hold it down` +
+          `${pull > 0 ? ` (about ${Math.round(pull)} N of pull)` : ''}, and their capacity is not checked; use screws and T-nuts rated for that, or move it further onto its supports`,
       });
     }
   }
@@ -426,11 +527,11 @@ export function checkLoads(
     const g = modules[b.module];
     const on = new Set(b.contacts.map((c) => c.member));
     if (b.bearing === 'base' && on.size === 1) {
-      const id = members[[...on][0]].member.id;
+      const id = memberRef(members[[...on][0]].member.id);
       warnings.push({
         code: 'module-one-member',
         module_id: g.module.id,
-        message: `${label(g.module.name, g.module.id)} stands on one member only (${id}): nothing stops it turning over that member; set it on two or more members`,
+        message: `${moduleLabel(g.module)} stands on one member only (${id}): nothing stops it turning over that member; set it on two or more members`,
       });
     }
   });

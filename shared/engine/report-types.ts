@@ -5,6 +5,7 @@ import type { ToleranceClass } from '../model/settings';
 import type { FaceName } from './faces';
 import type { HardwareLine } from './hardware';
 import type { EndName, EndRole, JointKind } from './joints';
+import type { LateralCheck } from './loads';
 import type { MachiningOp } from './machining';
 import type { SpanCheck } from './member-checks';
 import type { ReportWarning } from './warnings';
@@ -96,6 +97,10 @@ export type ReportMember = {
   /** Cut length in the display unit, e.g. "760 mm" or `29 15/16"`. */
   cut_length_text: string;
   mark: string;
+  /** How messages and listings name the member: its kind, part mark and the name given, e.g. "rail C (top rail)". */
+  title: string;
+  /** The end (or both) the builder marked as bolted to the vehicle's wall, or null. */
+  wall_fixing: 'start' | 'end' | 'both' | null;
   ends: { start: ReportEnd; end: ReportEnd };
   ops: MachiningOp[];
   mass_kg: number;
@@ -178,6 +183,11 @@ export type ReportMemberCheck = {
   self_weight_N: number;
   /** An unsymmetric section (an angle) bending about its principal axes, free to deflect sideways. */
   unsymmetric: { deflection_factor: number; stress_factor: number } | null;
+  /**
+   * In the governing case, when it pushes sideways (braking, cornering): the member bent about its other axis by
+   * the inertia across it, and that combined with its vertical bending (`utilisation` already includes it).
+   */
+  lateral: LateralCheck | null;
 };
 
 export type ReportLoadCase = { id: string; name: string; vertical_factor: number; ax_g: number; ay_g: number; source: string };
@@ -218,7 +228,8 @@ export type ReportFixings = {
   case: string;
   horizontal_N: number;
   vertical_N: number;
-  points: { member_id: string; at_mm: Vec3; vertical_N: number; horizontal_N: number }[];
+  /** Feet on the floor and ends bolted to the wall; each given at least what it takes if the others were weaker. */
+  points: { member_id: string; mark: string; title: string; kind: 'floor' | 'wall'; at_mm: Vec3; vertical_N: number; horizontal_N: number }[];
 };
 
 export type ReportLoads = {

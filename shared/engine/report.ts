@@ -15,6 +15,7 @@ import { hardwareList } from './hardware';
 import { methodTable } from './join-methods';
 import { END_NAMES, findJoints, type EndName } from './joints';
 import { memberLengths } from './lengths';
+import { memberTitle, nameWarnings } from './names';
 import { checkLoads } from './loads';
 import { machiningOps, type MachiningOp } from './machining';
 import { massAndCentre } from './mass';
@@ -69,7 +70,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
     if (!(l.length_mm > 0.05) || !(l.cut_length_mm > 0.05)) {
       throw new InputError(
         `members[${i}]`,
-        `members[${i}]: member "${members[i].member.id}" is cut back to ${mm(l.length_mm)} mm by the members it meets; move its ends or theirs`,
+        `members[${i}]: the ${roleOf(members[i].member)}${members[i].member.name ? ` “${members[i].member.name}”` : ''} is cut back to ${mm(l.length_mm)} mm by the members it meets; move its ends or theirs`,
       );
     }
   });
@@ -90,6 +91,21 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   const { display, frac } = doc.units;
   const text = (v: number) => formatLength(v, display, frac);
   const idOf = (i: number) => members[i].member.id;
+  const markCount = new Map<string, number>();
+  for (const k of cuts.markOf) markCount.set(k, (markCount.get(k) ?? 0) + 1);
+  // Where a part with a shared mark is: its place on the two axes across it, at the centre of its section.
+  const whereOf = (i: number) => {
+    const b = eff[i];
+    const across = (['x', 'y', 'z'] as const).filter((a) => a !== members[i].axis);
+    return `at ${across.map((a) => `${a} ${text((b.min[ai(a)] + b.max[ai(a)]) / 2)}`).join(', ')}`;
+  };
+  const titles = new Map(
+    members.map((g, i) => [
+      g.member.id,
+      memberTitle({ role: roleOf(g.member), mark: cuts.markOf[i], name: g.member.name, where: (markCount.get(cuts.markOf[i]) ?? 0) > 1 ? whereOf(i) : undefined }),
+    ]),
+  );
+  const titleOf = (id: string) => titles.get(id) ?? 'a member';
 
   const reportMembers: ReportMember[] = members.map((g, i) => {
     const m = g.member;
@@ -119,6 +135,8 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       tolerance_mm: l.tolerance_mm,
       cut_length_text: text(l.cut_length_mm),
       mark: cuts.markOf[i],
+      title: titleOf(m.id),
+      wall_fixing: m.wallFixing ?? null,
       ends: { start: ends[0], end: ends[1] },
       ops: ops[i].map(roundOp),
       mass_kg: round(mass.member_kg[i], 5),
@@ -136,7 +154,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       count: s.count,
       closed_by: s.closed_by,
       for: s.for,
-      message: `${id} (part ${cuts.markOf[s.member]}), ${s.face} face, slot ${s.slot}: both ends are closed by ${s.closed_by[0]} and ${s.closed_by[1]}; slide in ${nuts} before fitting them, or use drop-in T-nuts`,
+      message: `${titleOf(id)}, ${s.face} face, slot ${s.slot}: both ends are closed by ${titleOf(s.closed_by[0])} and ${titleOf(s.closed_by[1])}; slide in ${nuts} before fitting them, or use drop-in T-nuts`,
     };
   });
 
@@ -167,6 +185,17 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
     governing: c.governing,
     governing_case: c.case,
     self_weight_N: round(c.self_weight_N, 3),
+    lateral: c.lateral
+      ? {
+          load_N: round(c.lateral.load_N, 3),
+          bending_axis: c.lateral.bending_axis,
+          deflection_mm: round(c.lateral.deflection_mm, 5),
+          stress_MPa: round(c.lateral.stress_MPa, 4),
+          utilisation: round(c.lateral.utilisation, 5),
+          combined_utilisation: round(c.lateral.combined_utilisation, 5),
+          governing: c.lateral.governing,
+        }
+      : null,
     unsymmetric: c.unsymmetric ? { deflection_factor: round(c.unsymmetric.deflection_factor, 5), stress_factor: round(c.unsymmetric.stress_factor, 5) } : null,
   }));
   const columns = loads.columns.map((c) => ({
@@ -193,13 +222,13 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   for (const c of checks) if (c.utilisation !== null && (governing === null || c.utilisation > governing.utilisation)) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'beam' };
   for (const c of columns) if (governing === null || c.utilisation > governing.utilisation) governing = { member_id: c.member_id, utilisation: c.utilisation, check: 'column' };
 
-  const warnings = [...joints.warnings, ...frameWarnings(members, joints), ...bearingWarnings, ...findClashes(modules, members, eff), ...hardware.warnings, ...loads.warnings];
+  const warnings = nameWarnings([...joints.warnings, ...frameWarnings(members, joints), ...bearingWarnings, ...findClashes(modules, members, eff), ...hardware.warnings, ...loads.warnings], titleOf);
   for (const c of columns) {
     if (c.utilisation > 1) {
       warnings.push({
         code: 'column-over-utilised',
         member_id: c.member_id,
-        message: `${c.member_id} (part ${c.mark}) carries ${Math.round(c.axial_N)} N as a column, ${Math.round(c.utilisation * 100)} % of its buckling resistance (${Math.round(c.capacity_N)} N at K = ${c.K}): use a stiffer profile, brace the frame or shorten the upright`,
+        message: `${titleOf(c.member_id)} carries ${Math.round(c.axial_N)} N as a column, ${Math.round(c.utilisation * 100)} % of its buckling resistance (${Math.round(c.capacity_N)} N at K = ${c.K}): use a stiffer profile, brace the frame or shorten the upright`,
       });
     }
   }
@@ -208,7 +237,8 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
     warnings.push({
       code: 'unsymmetric-section',
       member_id: [...unsymmetric][0],
-      message: `${[...unsymmetric].join(', ')}: unsymmetric sections (angles) bend about their principal axes; they are checked with nothing holding them sideways (lateral restraint not assumed), which over-reports a member screwed along a panel`,
+      member_ids: [...unsymmetric],
+      message: `${[...unsymmetric].map(titleOf).join(', ')}: unsymmetric sections (angles) bend about their principal axes; they are checked with nothing holding them sideways (lateral restraint not assumed), which over-reports a member screwed along a panel`,
     });
   }
   for (const c of checks) {
@@ -216,7 +246,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       warnings.push({
         code: 'over-utilised',
         member_id: c.member_id,
-        message: `${c.member_id} (part ${c.mark}) is at ${Math.round(c.utilisation * 100)} % of its ${c.governing} limit: use a stiffer profile, shorten the span or add a support`,
+        message: `${titleOf(c.member_id)} is at ${Math.round(c.utilisation * 100)} % of its ${c.governing} limit${c.lateral && c.lateral.combined_utilisation >= c.utilisation ? ` with the sideways push of ${loads.cases.find((x) => x.id === c.governing_case)?.name ?? 'braking or cornering'}` : ''}: use a stiffer profile, shorten the span or add a support`,
       });
     }
   }
@@ -348,7 +378,15 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
         case: f.case,
         horizontal_N: round(f.horizontal_N, 3),
         vertical_N: round(f.vertical_N, 3),
-        points: f.points.map((p) => ({ member_id: idOf(p.member), at_mm: vec(p.at, 2), vertical_N: round(p.vertical_N, 3), horizontal_N: round(p.horizontal_N, 3) })),
+        points: f.points.map((p) => ({
+          member_id: idOf(p.member),
+          mark: cuts.markOf[p.member],
+          title: titleOf(idOf(p.member)),
+          kind: p.kind,
+          at_mm: vec(p.at, 2),
+          vertical_N: round(p.vertical_N, 3),
+          horizontal_N: round(p.horizontal_N, 3),
+        })),
       })),
       fixings_caution: FIXINGS_CAUTION,
       model_notes: [...LOAD_MODEL_NOTES],

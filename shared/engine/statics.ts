@@ -119,3 +119,73 @@ export function rigidBodyReactions(points: readonly RestPoint[], W: number, at: 
   }
   return all;
 }
+
+/** A rest point that belongs to one support (a member the body touches along a stretch of it). */
+export type SupportPoint = RestPoint & { contact: number };
+
+export type BoundResult = {
+  /** Per point: the reactions of the sub-case that loads its support most; they sum to at least the load. */
+  reactions: number[];
+  /** The rigid body on equally stiff supports (as rigidBodyReactions), for tipping and the record. */
+  equal: RigidBodyResult;
+};
+
+/** Above this many supports, sets of three are not tried and every support is given the whole load instead. */
+const MAX_SUPPORTS_FOR_TRIPLES = 10;
+
+/**
+ * A rigid body on three or more supports is statically indeterminate: how it shares depends on how stiff each
+ * support is, which the drawing does not say. Every pushing share of the load is a mix of the statically
+ * determinate ones (the body on one, two or three of its supports alone, by the lever rule along and across;
+ * the vertices of the set of pushing reactions that satisfy ΣF = 0, ΣM = 0), so the most any one support can take
+ * is the most it takes in one of those. Each support is given that, with the equal-stiffness share as a floor, and
+ * its stretch carries the pressure of the sub-case that loads it most; with more supports than can be tried in
+ * threes, each takes the whole load. Two supports or fewer are determinate and solved as they are.
+ */
+export function safeSideReactions(points: readonly SupportPoint[], W: number, at: { x: number; y: number }): BoundResult {
+  const equal = rigidBodyReactions(points, W, at);
+  const supports = [...new Set(points.map((p) => p.contact))];
+  if (supports.length < 3 || !(W > 0) || equal.tips !== null) return { reactions: equal.reactions, equal };
+  const bySupport = new Map<number, number[]>();
+  points.forEach((p, i) => bySupport.set(p.contact, [...(bySupport.get(p.contact) ?? []), i]));
+  const sumOf = (r: readonly number[], idx: readonly number[]) => idx.reduce((s, i) => s + r[i], 0);
+  const best = new Map<number, { R: number; reactions: Map<number, number> }>();
+  for (const c of supports) {
+    const idx = bySupport.get(c) as number[];
+    best.set(c, { R: sumOf(equal.reactions, idx), reactions: new Map(idx.map((i) => [i, equal.reactions[i]])) });
+  }
+  if (supports.length > MAX_SUPPORTS_FOR_TRIPLES) {
+    // The whole load on each support, spread as its own stretch alone would carry it: plainly on the safe side.
+    for (const c of supports) {
+      const idx = bySupport.get(c) as number[];
+      const total = idx.reduce((s, i) => s + points[i].weight, 0);
+      best.set(c, { R: W, reactions: new Map(idx.map((i) => [i, (W * points[i].weight) / total])) });
+    }
+  } else {
+    const tryOn = (set: readonly number[]) => {
+      const idx = set.flatMap((c) => bySupport.get(c) as number[]);
+      const r = rigidBodyReactions(
+        idx.map((i) => points[i]),
+        W,
+        at,
+      );
+      if (r.tips !== null) return;
+      for (const c of set) {
+        const mine = (bySupport.get(c) as number[]).map((i) => idx.indexOf(i));
+        const R = mine.reduce((s, k) => s + r.reactions[k], 0);
+        const b = best.get(c) as { R: number };
+        if (R > b.R + 1e-9 * W) best.set(c, { R, reactions: new Map(mine.map((k) => [idx[k], r.reactions[k]])) });
+      }
+    };
+    const n = supports.length;
+    for (let a = 0; a < n; a++) {
+      tryOn([supports[a]]);
+      for (let b = a + 1; b < n; b++) {
+        tryOn([supports[a], supports[b]]);
+        for (let c = b + 1; c < n; c++) tryOn([supports[a], supports[b], supports[c]]);
+      }
+    }
+  }
+  const reactions = points.map((p, i) => best.get(p.contact)?.reactions.get(i) ?? 0);
+  return { reactions, equal };
+}

@@ -20,10 +20,14 @@ export type ReportWarning = {
     | 'member-isolated'
     | 'member-duplicate'
     | 'column-over-utilised'
-    | 'unsymmetric-section';
+    | 'unsymmetric-section'
+    | 'frame-racking';
   /** `error` where the design does not stand as drawn (a module tips off); warnings otherwise. */
   severity?: 'error';
   message: string;
+  /** The member or module to highlight; never shown in the message, which names things as the builder does. */
   member_id?: string;
+  /** Every member the message names, when it names more than one. */
+  member_ids?: string[];
   module_id?: string;
 };

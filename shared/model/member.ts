@@ -15,6 +15,10 @@ export const memberEndSchema = positionSchema.safeExtend({
 });
 export type MemberEnd = z.output<typeof memberEndSchema>;
 
+/** Which end of a member is bolted to the vehicle's wall. */
+export const wallFixingSchema = z.enum(['start', 'end', 'both'], { message: 'must be "start", "end" or "both"' });
+export type WallFixing = z.infer<typeof wallFixingSchema>;
+
 export const MEMBER_ROLES = ['upright', 'rail', 'cross-member', 'brace', 'other'] as const;
 export const memberRoleSchema = z.enum(MEMBER_ROLES);
 export type MemberRole = z.infer<typeof memberRoleSchema>;
@@ -23,7 +27,8 @@ export type MemberRole = z.infer<typeof memberRoleSchema>;
  * A straight length of profile along one axis. Its extent on that axis runs from `start` to `end` (or
  * `start + length_mm`); `place` positions its cross-section on the other two axes (the low face by default,
  * `align` to put the centre or high face there instead). Rotation turns the profile about its own axis in
- * quarter turns. `mark` pins a part mark (e.g. once the part has been cut and labelled).
+ * quarter turns. `mark` pins a part mark (e.g. once the part has been cut and labelled). `wallFixing` marks the
+ * end (or both) the builder bolts to the vehicle's wall; the floor fixings are the feet of the uprights.
  */
 export const memberSchema = z
   .strictObject({
@@ -39,6 +44,7 @@ export const memberSchema = z
     length_mm: lengthMm().positive('must be more than 0').optional(),
     place: placeSchema,
     mark: z.string().regex(/^[A-Z]{1,3}$/, 'must be capital letters, e.g. "A" or "AB"').optional(),
+    wallFixing: wallFixingSchema.optional(),
   })
   .superRefine((m, ctx) => {
     if ((m.end === undefined) === (m.length_mm === undefined)) {

@@ -20,6 +20,8 @@ export const bayPanelInputSchema = z.object({
   profile_mm: len(10, 200),
   /** Slot: how far the panel runs into each slot; defaults to the slot opening (common practice, no source). */
   engagement_mm: len(1, 30).optional(),
+  /** Slot: how deep the slot is below the face, where the profile's sheet gives it; the engagement must not reach past it. */
+  slotDepth_mm: len(1, 60).optional(),
   /** Slot: total play left in each direction so the panel slides in (common practice, no source). */
   play_mm: len(0, 5).default(1),
   /** Surface: how far the panel laps over each member; defaults to the profile's full face. */
@@ -47,6 +49,9 @@ export function bayPanel(input: BayPanelInput): BayPanel {
       throw new InputError('thickness_mm', `thickness_mm: a ${fmt(p.thickness_mm)} panel does not pass a ${fmt(p.slot_mm)} slot opening; use a thinner panel or mount it on the surface`);
     }
     const e = p.engagement_mm ?? p.slot_mm;
+    if (p.slotDepth_mm !== undefined && e > p.slotDepth_mm) {
+      throw new InputError('engagement_mm', `engagement_mm: a panel cannot run ${fmt(e)} into a slot ${fmt(p.slotDepth_mm)} deep; engage it at most ${fmt(p.slotDepth_mm)}`);
+    }
     const part: SheetPart = { name: p.name, length_mm: L + 2 * e - p.play_mm, width_mm: W + 2 * e - p.play_mm, thickness_mm: p.thickness_mm, qty: 1, grain: p.grain };
     const notes = [`runs ${fmt(e)} into each slot`, 'slide it in before the members around it are closed'];
     if (p.slot_mm - p.thickness_mm > 2) notes.push(`${fmt(p.slot_mm - p.thickness_mm)} looser than the slot: add a slot cover strip or it will rattle`);

@@ -7,3 +7,4 @@ export * from './parts';
 export * from './slides';
 export * from './openings';
 export * from './sheet-goods';
+export * from './report-with-goods';

@@ -4,7 +4,6 @@
 // gravity join the frame's.
 import type { FrameReport } from '../engine/report-types';
 import { InputError } from '../errors';
-import type { FrameDocument } from '../model/frame-document';
 import type { Vec3 } from '../model/axis';
 import { bayPanel } from './bay-panels';
 import { countertop } from './countertop';
@@ -169,15 +168,4 @@ function mergeHardware(lines: HardwareLine[]): HardwareLine[] {
     else by.set(l.item, { ...l });
   }
   return [...by.values()];
-}
-
-/**
- * The document with each drawer module's mass raised by its box and face, so the report's loads, mass and centre of
- * gravity carry them. It adds rather than replaces: where the builder's module mass already held the box, the loads
- * come out high, never low (the safe side).
- */
-export function withDrawerMass(doc: FrameDocument, goods: SheetGoods): FrameDocument {
-  const extra = new Map<string, number>();
-  for (const p of goods.parts) if (goods.drawers.some((d) => d.opening.module_id === p.owner)) extra.set(p.owner, (extra.get(p.owner) ?? 0) + p.mass_kg);
-  return { ...doc, modules: doc.modules.map((m) => (extra.has(m.id) ? { ...m, mass_kg: m.mass_kg + (extra.get(m.id) as number) } : m)) };
 }

@@ -22,7 +22,7 @@ export function shopCutList(report: FrameReport): ShopCutList {
       ),
       members: [...new Set(l.member_ids.map((id) => names.get(id) ?? id))],
     })),
-    hardware: report.hardware.lines.map((h) => ({ key: h.key, kind: h.kind, name: h.name, qty: h.count, spares: Math.max(0, h.order_qty - h.count), toBuy: h.order_qty })),
+    hardware: report.hardware.lines.map((h) => ({ key: h.key, kind: h.kind, name: shopHardwareName(h), qty: h.count, spares: Math.max(0, h.order_qty - h.count), toBuy: h.order_qty })),
     nutWarnings: report.hardware.t_nut_order.map((t) => ({
       mark: t.mark,
       message: t.message,
@@ -33,4 +33,9 @@ export function shopCutList(report: FrameReport): ShopCutList {
       closedBy: t.closed_by.map((id) => names.get(id) ?? id),
     })),
   };
+}
+
+/** A sheet goods line (a drawer slide) keeps its length in the name, as the frame's screws do. */
+function shopHardwareName(h: FrameReport['hardware']['lines'][number]): string {
+  return h.key.startsWith('goods|') && h.length_mm !== null ? `${h.name}, ${h.length_mm} mm` : h.name;
 }

@@ -1,5 +1,6 @@
 import { inject, type InjectionKey } from 'vue';
 import { createAuthApi } from './auth';
+import { createBinApi } from './bin';
 import { createFramesApi } from './frames';
 import type { Http } from './http';
 import { createMembersApi } from './members';
@@ -17,6 +18,7 @@ export function createApi(http: Http) {
     invitations: createInvitationsApi(http),
     sharing: createSharingApi(http),
     activity: createActivityApi(http),
+    bin: createBinApi(http),
   };
 }
 export type Api = ReturnType<typeof createApi>;

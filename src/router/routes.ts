@@ -20,6 +20,7 @@ export interface RouteNamedMap {
   suppliers: RouteRecordInfo<'suppliers', '/w/:workshopId/suppliers', WorkshopParams, WorkshopParams>;
   orders: RouteRecordInfo<'orders', '/w/:workshopId/orders', WorkshopParams, WorkshopParams>;
   outbox: RouteRecordInfo<'outbox', '/w/:workshopId/outbox', WorkshopParams, WorkshopParams>;
+  bin: RouteRecordInfo<'bin', '/w/:workshopId/bin', WorkshopParams, WorkshopParams>;
   planner: RouteRecordInfo<'planner', '/planner', NoParams, NoParams>;
   invitation: RouteRecordInfo<'invitation', '/invitation/:token', { token: string }, { token: string }>;
   'forgot-password': RouteRecordInfo<'forgot-password', '/forgot-password', NoParams, NoParams>;
@@ -88,6 +89,7 @@ export const routes: RouteRecordRaw[] = [
   { path: '/w/:workshopId/suppliers', name: 'suppliers', component: () => import('@/views/SuppliersView.vue'), meta: { requires: 'read', title: 'Suppliers and stock' } },
   { path: '/w/:workshopId/orders', name: 'orders', component: () => import('@/views/OrdersView.vue'), meta: { requires: 'read', title: 'Orders' } },
   { path: '/planner', name: 'planner', component: () => import('@/views/QuickPlannerView.vue'), meta: { title: 'Quick planner' } },
+  { path: '/w/:workshopId/bin', name: 'bin', component: () => import('@/views/BinView.vue'), meta: { requires: 'project.write', title: 'Bin' } },
   { path: '/w/:workshopId/outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { requires: 'workshop.manage', title: 'Outbox' } },
   {
     path: '/forbidden',

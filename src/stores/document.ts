@@ -7,6 +7,7 @@ import { emptyScene, type Scene } from '@shared/editing/scene';
 import { sceneFromDocument } from '@shared/editing/scene-from-document';
 import type { WhatChanged } from '@shared/engine/diff';
 import type { FrameReport } from '@shared/engine/report';
+import type { SheetGoods } from '@shared/panels/sheet-goods';
 import { InputError } from '@shared/errors';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
@@ -46,6 +47,8 @@ export const useDocumentStore = defineStore('document', () => {
   const doc = shallowRef<FrameDocument | null>(null);
   const report = shallowRef<FrameReport | null>(null);
   const scene = shallowRef<Scene>(emptyScene());
+  /** The drawers, faces, panels and countertop the report sized, with their parts by material. */
+  const goods = shallowRef<SheetGoods | null>(null);
   /** The document could not be read at all (it was saved by a newer build, or damaged). */
   const loadError = ref<string | null>(null);
   const readOnly = ref(true);
@@ -82,6 +85,7 @@ export const useDocumentStore = defineStore('document', () => {
   function onReport(a: ReportAnswer): void {
     report.value = a.report;
     scene.value = a.scene;
+    goods.value = a.goods;
     engineMs.value = a.ms;
     engineError.value = null;
     checking.value = false;
@@ -118,6 +122,7 @@ export const useDocumentStore = defineStore('document', () => {
     summary.value = null;
     refusal.value = null;
     report.value = null;
+    goods.value = null;
     engineError.value = null;
     summaryLabel = null;
     readOnly.value = !canWrite;
@@ -155,6 +160,7 @@ export const useDocumentStore = defineStore('document', () => {
     frameId.value = null;
     doc.value = null;
     report.value = null;
+    goods.value = null;
     reports.cancel();
     checking.value = false;
     engineError.value = null;
@@ -299,6 +305,7 @@ export const useDocumentStore = defineStore('document', () => {
     frameId,
     doc,
     report,
+    goods,
     scene,
     loadError,
     readOnly,

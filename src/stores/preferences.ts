@@ -8,10 +8,12 @@ export type InchFraction = 16 | 32;
 export interface Preferences {
   units: LengthUnit;
   fraction: InchFraction;
+  /** Draw the drawer boxes, panels and countertop in the editor's views. */
+  showSheetGoods: boolean;
 }
 
 const STORAGE_KEY = 'slotwright.preferences';
-export const DEFAULT_PREFERENCES: Readonly<Preferences> = { units: 'mm', fraction: 16 };
+export const DEFAULT_PREFERENCES: Readonly<Preferences> = { units: 'mm', fraction: 16, showSheetGoods: true };
 
 /** Reads stored preferences, keeping only values that are still valid. */
 export function parsePreferences(text: string | null): Preferences {
@@ -21,6 +23,7 @@ export function parsePreferences(text: string | null): Preferences {
     const raw = JSON.parse(text) as Record<string, unknown>;
     if (raw.units === 'mm' || raw.units === 'in') result.units = raw.units;
     if (raw.fraction === 16 || raw.fraction === 32) result.fraction = raw.fraction;
+    if (typeof raw.showSheetGoods === 'boolean') result.showSheetGoods = raw.showSheetGoods;
   } catch {
     // A damaged entry falls back to the defaults.
   }
@@ -40,14 +43,15 @@ export const usePreferencesStore = defineStore('preferences', () => {
   const initial = parsePreferences(readStored());
   const units = ref<LengthUnit>(initial.units);
   const fraction = ref<InchFraction>(initial.fraction);
+  const showSheetGoods = ref<boolean>(initial.showSheetGoods);
 
-  watch([units, fraction], () => {
+  watch([units, fraction, showSheetGoods], () => {
     try {
-      localStorage.setItem(STORAGE_KEY, JSON.stringify({ units: units.value, fraction: fraction.value }));
+      localStorage.setItem(STORAGE_KEY, JSON.stringify({ units: units.value, fraction: fraction.value, showSheetGoods: showSheetGoods.value }));
     } catch {
       // Storage refused: the choice lasts for this page only.
     }
   });
 
-  return { units, fraction };
+  return { units, fraction, showSheetGoods };
 });

@@ -3,9 +3,11 @@
 import { sceneFromReport } from '@shared/editing/scene-from-report';
 import type { Scene } from '@shared/editing/scene';
 import { diffReports, type WhatChanged } from '@shared/engine/diff';
-import { computeReport, type FrameReport } from '@shared/engine/report';
+import type { FrameReport } from '@shared/engine/report';
 import { InputError } from '@shared/errors';
 import type { FrameDocument } from '@shared/model/frame-document';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
+import type { SheetGoods } from '@shared/panels/sheet-goods';
 
 export type ReportRequest = {
   /** Increases with every document the editor applies; answers carry it back so stale ones can be told apart. */
@@ -18,7 +20,7 @@ export type ReportRequest = {
 };
 
 export type ReportReply =
-  | { type: 'report'; revision: number; report: FrameReport; scene: Scene; ms: number; changes: WhatChanged | null }
+  | { type: 'report'; revision: number; report: FrameReport; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
   | { type: 'error'; revision: number; message: string; field: string | null };
 
 /** One engine per frame editor: part marks carry over from each report to the next, as the parts stay the same. */
@@ -28,11 +30,12 @@ export function createReportEngine(now: () => number = () => performance.now()):
     if (req.reset) last = null;
     const t0 = now();
     try {
-      const report = computeReport(req.doc, last ? { previous: last } : {});
-      const scene = sceneFromReport(req.doc, report);
+      // With the drawers', panels' and countertop's mass and hardware, as the shop documents have them.
+      const { report, goods } = reportWithSheetGoods(req.doc, last ? { previous: last } : {});
+      const scene = sceneFromReport(req.doc, report, goods);
       const changes = req.summarise && last ? diffReports(last, report) : null;
       last = report;
-      return { type: 'report', revision: req.revision, report, scene, ms: now() - t0, changes };
+      return { type: 'report', revision: req.revision, report, scene, goods, ms: now() - t0, changes };
     } catch (e) {
       return { type: 'error', revision: req.revision, message: e instanceof Error ? e.message : String(e), field: e instanceof InputError ? e.field : null };
     }

@@ -24,12 +24,21 @@ describe('the Drawers & panels tab', () => {
     const row = page.getByTestId('drawer-cooler-drawer');
     await row.waitFor();
     expect(await row.textContent()).toContain(`${formatLength(394.6, 'mm')} × ${formatLength(114.6, 'mm')} × ${formatLength(500, 'mm')}`);
+    // The builder's own slide: 10 mm a side from its sheet → 420 − 2·10 = 400 mm wide.
+    const side = page.getByTestId('slide-sideDeduction_mm').locator('input');
+    await side.fill('10 mm');
+    await side.press('Enter');
+    await expect.poll(async () => (await row.textContent()) ?? '').toContain(`${formatLength(400, 'mm')} × ${formatLength(114.6, 'mm')}`);
     const goods = sheetGoods(computeReport(doc));
     for (const m of new Set(goods.parts.map((p) => p.material.name))) await page.getByRole('heading', { name: m }).waitFor();
     await page.getByTestId('plan-sheets').click();
     const sheets = page.getByRole('list', { name: 'Sheets needed' });
     await sheets.waitFor();
     expect(await sheets.locator('li').count()).toBe(new Set(goods.parts.map((p) => p.material.id)).size);
+    // An offcut on hand is taken before a bought sheet.
+    await page.getByTestId('add-offcut').click();
+    await page.getByTestId('plan-sheets').click();
+    await expect.poll(async () => (await sheets.innerText()).includes('from offcuts on hand')).toBe(true);
     await page.screenshot({ path: screenshotPath('editor-drawers.png') });
   });
 });

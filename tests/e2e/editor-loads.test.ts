@@ -39,12 +39,22 @@ describe('the Loads tab', () => {
 
   it('leads with the tipping error, lists the legs as columns, and refuses a shock factor out of bounds', async () => {
     await page.getByRole('tab', { name: /^Loads/ }).click();
-    await expect.poll(() => page.getByText(/Storage box \(box\) tips off toward the right/).count()).toBeGreaterThan(0);
+    await expect.poll(() => page.getByText(/“Storage box” tips off toward the right/).count()).toBeGreaterThan(0);
     const columns = page.getByTestId('loads-columns');
     await columns.waitFor();
     expect(await columns.locator('li').count()).toBeGreaterThan(0);
     expect(await columns.innerText()).toMatch(/Buckling governs/);
     await page.screenshot({ path: screenshotPath('editor-loads.png'), fullPage: true });
+
+    // Bolt the top of one leg to the wall: the Loads tab lists what that fixing must take, named by part mark.
+    await columns.locator('button').first().click();
+    await page.getByRole('tab', { name: 'Part' }).click();
+    await page.getByTestId('wall-fixing-end').locator('input').check();
+    await page.getByRole('tab', { name: /^Loads/ }).click();
+    const wall = page.getByTestId('loads-wall-fixing').first();
+    await wall.waitFor();
+    expect(await wall.innerText()).toMatch(/^Wall at upright [A-Z]+.*: \d+ N down, \d+ N across/);
+    await page.screenshot({ path: screenshotPath('editor-loads-wall.png'), fullPage: true });
 
     const shock = page.getByTestId('load-case-settings').getByLabel('Vertical shock factor');
     await shock.scrollIntoViewIfNeeded();

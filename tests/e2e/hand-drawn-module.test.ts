@@ -51,8 +51,10 @@ describe('a module seated on a hand-drawn frame', () => {
     await page.getByRole('tab', { name: /^Loads/ }).click();
     const list = page.getByRole('list', { name: 'What each module bears on' });
     const lines = (await list.locator('li li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim());
-    expect(lines.some((l) => /rail-front \d+ %$/.test(l))).toBe(true);
-    expect(lines.some((l) => /rail-back \d+ %$/.test(l))).toBe(true);
+    // Named as the builder knows them: kind and part mark (the two are the same part, so where each one is), never the id.
+    expect(lines.some((l) => /^rail [A-Z]+ \(at y 20 mm, z 320 mm\) \d+ %$/.test(l))).toBe(true);
+    expect(lines.some((l) => /^rail [A-Z]+ \(at y 380 mm, z 320 mm\) \d+ %$/.test(l))).toBe(true);
+    expect(lines.join(' ')).not.toMatch(/rail-front|rail-back/);
     const pct = lines.map((l) => Number(/(\d+) %$/.exec(l)?.[1] ?? 0));
     expect(Math.max(...pct)).toBeGreaterThan(0);
   });

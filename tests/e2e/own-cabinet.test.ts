@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
+import { newWorkshopAndProject, signUp } from './support/fresh-account';
 import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
@@ -11,27 +12,6 @@ import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './edi
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
 
 const stamp = Date.now().toString(36);
-
-async function signUp(page: Page, who = 'builder'): Promise<void> {
-  await page.goto('/sign-in');
-  await page.getByRole('tab', { name: 'Create account' }).click();
-  await page.getByLabel('Your name').fill('New Builder');
-  await page.getByLabel('E-mail').fill(`${who}-${stamp}@example.test`);
-  await page.getByLabel('Password', { exact: true }).fill('a long enough password');
-  await page.getByRole('button', { name: 'Create account', exact: true }).click();
-  await page.getByRole('heading', { name: 'Workshops', level: 1 }).waitFor();
-}
-
-async function newProject(page: Page): Promise<void> {
-  await page.getByRole('button', { name: 'New workshop' }).first().click();
-  await page.getByLabel('Workshop name').fill(`Van shop ${stamp}`);
-  await page.getByRole('button', { name: 'Create', exact: true }).click();
-  await page.getByRole('heading', { name: 'Projects', level: 1 }).waitFor();
-  await page.getByRole('button', { name: 'New project' }).first().click();
-  await page.getByLabel('Project name').fill('My galley');
-  await page.getByRole('button', { name: 'Create project' }).click();
-  await page.getByRole('heading', { name: 'My galley', level: 1 }).waitFor();
-}
 
 /** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
 async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
@@ -50,8 +30,8 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page);
-    await newProject(page);
+    await signUp(page, `builder-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
   });
 
   it('lays out cooler, sink and drawers; loads per module; swap, undo; a bay added at the end and removed', async () => {
@@ -152,8 +132,8 @@ describe('options of a module, compared side by side', () => {
   let page: Page;
   useBrowserPage(async (opened) => {
     page = opened;
-    await signUp(page, 'options');
-    await newProject(page);
+    await signUp(page, `options-${stamp}@example.test`);
+    await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
     await page.getByRole('button', { name: 'From a cabinet layout' }).click();
     await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
     await page.getByTestId('frame-editor').waitFor();

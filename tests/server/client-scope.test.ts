@@ -158,6 +158,10 @@ const REFUSED: Record<string, Call[]> = {
   'POST /api/projects/:projectId/share-links': [['post', (i) => `/api/projects/${i.A}/share-links`, { days: 30 }]],
   'DELETE /api/share-links/:shareLinkId': [['delete', (i) => `/api/share-links/${i.shareLink}`]],
   'GET /api/projects/:projectId/activity': [['get', (i) => `/api/projects/${i.A}/activity`]],
+  'GET /api/projects/:projectId/export': [['get', (i) => `/api/projects/${i.A}/export`]],
+  'POST /api/workshops/:workshopId/projects/import': [['post', (i) => `/api/workshops/${i.W}/projects/import`]],
+  'GET /api/workshops/:workshopId/bin': [['get', (i) => `/api/workshops/${i.W}/bin`]],
+  'POST /api/projects/:projectId/restore': [['post', (i) => `/api/projects/${i.A}/restore`], ['post', (i) => `/api/projects/${i.B}/restore`]],
 };
 
 // Routes that do not depend on the caller's workshop (signing in and out, tokens from e-mails, the planner,

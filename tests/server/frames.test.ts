@@ -175,10 +175,12 @@ describe('deleting and restoring', () => {
     const binned = frameSummarySchema.array().parse((await owner.get(`/api/projects/${projectId}/frames?deleted=true`).expect(200)).body);
     expect(binned.find((f) => f.id === frame.id)?.deletedAt).toEqual(expect.any(String));
 
-    // Deleted frames take no edits until restored.
+    // A frame in the bin is in the bin only: no other route reads or edits it until it is restored.
     const save = await designer.put(`/api/frames/${frame.id}/document`, { baseVersion: 1, document: sampleDocument(1) });
-    expect(save.status).toBe(422);
-    expect((await designer.patch(`/api/frames/${frame.id}`, { name: 'x' })).status).toBe(422);
+    expect(save.status).toBe(404);
+    expect((await designer.patch(`/api/frames/${frame.id}`, { name: 'x' })).status).toBe(404);
+    expect((await designer.get(`/api/frames/${frame.id}`)).status).toBe(404);
+    expect((await designer.get(`/api/frames/${frame.id}/revisions`)).status).toBe(404);
 
     const restored = frameSummarySchema.parse((await designer.post(`/api/frames/${frame.id}/restore`).expect(200)).body);
     expect(restored.deletedAt).toBeNull();

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiErrorSchema } from '@shared/api/errors';
 import { signedIn, type ApiClient } from '../support/api-client';
-import { makeUser } from '../support/factories';
+import { makeFrame, makeProject, makeUser, makeWorkshop } from '../support/factories';
+import { demoDocument } from './shop-world';
 import { createTestContext, truncateAll, type TestContext } from '../support/test-app';
 
 // Plans run in a pool of worker threads behind a bounded queue. Here the pool is one thread and a queue of one,
@@ -55,5 +56,32 @@ describe('POST /api/plan/cut under load', () => {
     // piscina terminates the thread running an aborted task: none of the threads from before is left.
     expect(ctx.workers.stats.threadIds.filter((id) => before.threadIds.includes(id))).toEqual([]);
     expect(ctx.loggedErrors).toEqual([]);
+  });
+});
+
+describe('the sheet-plan PDF', () => {
+  it('is made in the worker pool like the other shop documents: 503 while the pool is full, a PDF once it is free', async () => {
+    const owner = await makeUser(ctx.orm);
+    const workshop = await makeWorkshop(ctx.orm, [{ user: owner, role: 'owner' }]);
+    const frame = await makeFrame(ctx.orm, await makeProject(ctx.orm, workshop), { document: demoDocument() });
+    const shop = await signedIn(ctx.app, owner);
+    const running = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 300));
+    const queued = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 100));
+    // One thread busy and one task queued: a document made on the event loop would not notice.
+    const busy = await shop.get(`/api/frames/${frame.id}/shop/sheet-plan.pdf`);
+    expect(busy.status).toBe(503);
+    expect(Number(busy.headers['retry-after'])).toBeGreaterThan(0);
+    expect((await running).status).toBe(200);
+    expect((await queued).status).toBe(200);
+    const made = await shop.get(`/api/frames/${frame.id}/shop/sheet-plan.pdf`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (d: Buffer) => chunks.push(d));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(made.status).toBe(200);
+    expect(made.headers['content-type']).toBe('application/pdf');
+    expect((made.body as Buffer).subarray(0, 5).toString()).toBe('%PDF-');
   });
 });

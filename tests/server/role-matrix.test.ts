@@ -4,6 +4,8 @@ import { frameSchema, frameSummarySchema, revisionSchema, revisionSummarySchema,
 import { projectDetailSchema, projectSummarySchema } from '@shared/api/projects';
 import { memberSchema, workshopSummarySchema } from '@shared/api/workshops';
 import type { Role } from '@shared/api/roles';
+import { binEntrySchema } from '@shared/api/bin';
+import { projectFileSchema } from '@shared/api/project-file';
 import { Frame } from '../../server/modules/frames/frame.entity';
 import { Project } from '../../server/modules/projects/project.entity';
 import { Membership } from '../../server/modules/workshops/membership.entity';
@@ -150,6 +152,19 @@ const ROUTES: Record<string, RouteCase> = {
     prepare: async (w) => {
       const em = ctx.orm.em.fork();
       await em.nativeUpdate(Frame, { id: w.frameId }, { deletedAt: new Date() });
+    },
+  },
+  'GET /projects/:id/export': { method: 'get', path: (w) => `/api/projects/${w.projectId}/export`, allowed: EDITORS, status: 200, schema: projectFileSchema },
+  'GET /workshops/:id/bin': { method: 'get', path: (w) => `/api/workshops/${w.workshopId}/bin`, allowed: EDITORS, status: 200, schema: binEntrySchema.array() },
+  'POST /projects/:id/restore': {
+    method: 'post',
+    path: (w) => `/api/projects/${w.projectId}/restore`,
+    allowed: EDITORS,
+    status: 200,
+    schema: projectSummarySchema,
+    prepare: async (w) => {
+      const em = ctx.orm.em.fork();
+      await em.nativeUpdate(Project, { id: w.projectId }, { deletedAt: new Date() });
     },
   },
 };

@@ -62,6 +62,37 @@ describe('limits in the database', () => {
   });
 });
 
+describe('reset requests limited in the database', () => {
+  it('past the allowance a reset request is 429, through a second server too, and the count is a row', { timeout: 90_000 }, async () => {
+    await truncateAll(ctx.orm);
+    const c = await client();
+    const email = 'forgetful@example.test';
+    for (let i = 0; i < 2; i++) expect((await c.post('/api/auth/password-reset', { email })).status).toBe(202);
+    const blocked = await c.post('/api/auth/password-reset', { email });
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error.code).toBe('rate_limited');
+    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+
+    // Another server on the same database (or this one after a restart) sees the same count.
+    const other = await createTestContext({ SIGNIN_RATE_MAX: '2' });
+    try {
+      const c2 = await client(other.app);
+      expect((await c2.post('/api/auth/password-reset', { email })).status).toBe(429);
+    } finally {
+      await other.close();
+    }
+    const rows = await ctx.orm.em.fork().getConnection().execute<{ key: string; failures: number }[]>("select key, failures from sign_in_throttles where key like 'reset%'");
+    expect(rows.find((r) => r.key.startsWith('reset:') && r.key.endsWith(`|${email}`))?.failures).toBe(2);
+  });
+
+  it('one address asking for many e-mails is capped across them', { timeout: 90_000 }, async () => {
+    await truncateAll(ctx.orm);
+    const c = await client();
+    for (let i = 0; i < 6; i++) expect((await c.post('/api/auth/password-reset', { email: `someone${i}@example.test` })).status).toBe(202);
+    expect((await c.post('/api/auth/password-reset', { email: 'someone-new@example.test' })).status).toBe(429);
+  });
+});
+
 describe('no tell-tale timing, no common passwords', () => {
   it('an unknown e-mail takes about as long as a wrong password for a real one (same bcrypt cost)', { timeout: 90_000 }, async () => {
     await truncateAll(ctx.orm);

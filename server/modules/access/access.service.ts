@@ -1,4 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { BIN_MS } from '@shared/api/bin';
 import { can, type Action, type Role, type WorkshopRole } from '@shared/api/roles';
 import { ForbiddenError, NotFoundError } from '../../errors';
 import { Frame, type FrameEntity } from '../frames/frame.entity';
@@ -61,18 +62,42 @@ export async function authorizeProject(
   return { project, role };
 }
 
-/** Frames of a deleted project are gone with it; a deleted frame itself is still reachable (to read or restore). */
+/** Deleted frames, and the frames of a deleted project, are in the bin: no route but the bin's reaches them. */
 export async function authorizeFrame(
   em: EntityManager,
   userId: string,
   frameId: string,
   action: Action,
 ): Promise<{ frame: FrameEntity; role: Role }> {
-  const frame = await em.findOne(Frame, { id: frameId, project: { deletedAt: null } }, { populate: ['project'] });
+  const frame = await em.findOne(Frame, { id: frameId, deletedAt: null, project: { deletedAt: null } }, { populate: ['project'] });
   const role = frame ? await roleInProject(em, userId, frame.project) : null;
   if (!frame || !role) throw new NotFoundError('Frame');
-  // A client never sees a frame the shop has deleted.
-  if (role === 'client' && frame.deletedAt) throw new NotFoundError('Frame');
   check(role, action, 'Frame');
   return { frame, role };
+}
+
+/** The oldest deletion still in the bin; anything deleted before it is as good as purged. */
+export function binCutoff(now = Date.now()): Date {
+  return new Date(now - BIN_MS);
+}
+
+/**
+ * A project in the bin, for a member who may restore it. A client is no member, so the bin is 404 to them, as is
+ * anything past its 30 days.
+ */
+export async function authorizeBinnedProject(em: EntityManager, userId: string, projectId: string): Promise<ProjectEntity> {
+  const project = await em.findOne(Project, { id: projectId, deletedAt: { $gt: binCutoff() } });
+  const role = project ? await roleIn(em, userId, project.workshop.id) : null;
+  if (!project || !role) throw new NotFoundError('Project');
+  check(role, 'project.write', 'Project');
+  return project;
+}
+
+/** A frame in the bin (its project live), for a member who may restore it; 404 to clients and outsiders. */
+export async function authorizeBinnedFrame(em: EntityManager, userId: string, frameId: string): Promise<FrameEntity> {
+  const frame = await em.findOne(Frame, { id: frameId, deletedAt: { $gt: binCutoff() }, project: { deletedAt: null } }, { populate: ['project'] });
+  const role = frame ? await roleIn(em, userId, frame.project.workshop.id) : null;
+  if (!frame || !role) throw new NotFoundError('Frame');
+  check(role, 'frame.write', 'Frame');
+  return frame;
 }

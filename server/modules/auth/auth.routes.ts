@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator } from 'express-rate-limit';
 import type { AuthResponse, CsrfResponse, MeResponse } from '@shared/api/auth';
 import {
   changePasswordRequestSchema,
@@ -20,11 +20,6 @@ import { clientProjectsOf, createUser, findUser, membershipsOf, toUserDto, verif
 import { refuseCommonPassword } from './common-passwords';
 import { forget, recordFailure, refuseIfBlocked, type ThrottleRule } from './throttle';
 import { changePassword, confirmPasswordReset, requestPasswordReset } from './password.service';
-
-function emailKey(req: Request): string {
-  const email: unknown = (req.body as { email?: unknown } | undefined)?.email;
-  return typeof email === 'string' ? email.trim().toLowerCase() : '';
-}
 
 /** A fresh session id for the signed-in user (no fixation), with a fresh CSRF token. */
 async function startSignedInSession(req: Request, userId: string): Promise<string> {
@@ -52,20 +47,20 @@ export function authRouter(orm: Orm, config: Config): Router {
     res.set('RateLimit-Policy', `${rule.free};w=${Math.round(rule.windowMs / 1000)}`);
   const address = (req: Request) => ipKeyGenerator(req.ip ?? '');
 
-  const rateLimited = (message: string) => (_req: Request, _res: unknown, next: (err: unknown) => void) =>
-    next(new HttpError('rate_limited', message));
-  // Per address and e-mail, so nobody fills someone's mailbox with reset links.
-  const resetLimiter = rateLimit({
-    windowMs: config.signInRateLimit.windowMs,
-    limit: config.signInRateLimit.max,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${emailKey(req)}`,
-    handler: rateLimited('Too many reset requests; wait a few minutes and try again'),
-  });
+  // Reset requests per address and e-mail (nobody fills someone's mailbox with reset links) and per address across
+  // e-mails, in the same table as sign-in failures: every request counts, since mail is what is being limited.
+  const resetPairRule: ThrottleRule = { free: max, windowMs, firstDelayS: 60 };
+  const resetAddressRule: ThrottleRule = { free: max * 3, windowMs, firstDelayS: 60 };
 
-  router.post('/auth/password-reset', resetLimiter, async (req, res) => {
+  router.post('/auth/password-reset', async (req, res) => {
+    const em = orm.em;
     const { email } = parseInput(passwordResetRequestSchema, req.body);
+    const pair = `reset:${address(req)}|${email}`;
+    const ip = `reset-ip:${address(req)}`;
+    policy(res, resetPairRule);
+    await refuseIfBlocked(em, [pair, ip], 'Too many reset requests; wait a few minutes and try again');
+    await recordFailure(em, pair, resetPairRule);
+    await recordFailure(em, ip, resetAddressRule);
     const sendLater = await requestPasswordReset(orm.em, config, email);
     res.status(202).json({ message: 'If this address has an account, a link to choose a new password is on its way.' });
     const mailer = createMailer(config.mail);

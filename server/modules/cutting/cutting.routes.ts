@@ -5,13 +5,11 @@ import { idSchema } from '@shared/api/common';
 import type { Orm } from '../../db';
 import { ForbiddenError } from '../../errors';
 import { currentUserId } from '../../http/current-user';
-import { sheetPlanPdf } from '../../pdf';
-import { frameSheetPlans } from '../orders/sheet-plans';
 import { parseInput } from '../../validate';
 import { clientGone, type WorkerPool } from '../../workers/pool';
 import { needsPlan, SHOP_DOCS, type ShopDocumentOutput } from '../../workers/shop-document.task';
 import { authorizeFrame } from '../access/access.service';
-import { frameReport, offersOf, shelfOf, shopMeta, supplierFor, today } from '../orders/frame-shop.service';
+import { offersOf, shelfOf, supplierFor, today } from '../orders/frame-shop.service';
 import { sendFile } from '../orders/orders.routes';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { Workshop } from '../workshops/workshop.entity';
@@ -80,7 +78,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
   const cache = createShopCache();
   router.get('/frames/:frameId/shop/:doc', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, { frameId: req.params.frameId }, 'params');
-    const doc = parseInput(z.object({ doc: z.enum([...SHOP_DOCS, 'sheet-plan.pdf']) }), { doc: req.params.doc }, 'params').doc;
+    const doc = parseInput(z.object({ doc: z.enum(SHOP_DOCS) }), { doc: req.params.doc }, 'params').doc;
     const q = parseInput(docQuerySchema, req.query, 'query');
     const userId = currentUserId(req);
     const head = await frameHead(orm.em, userId, frameId, 'shop.read');
@@ -103,7 +101,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
   async function makeShopFile(
     userId: string,
     head: FrameFacts,
-    doc: (typeof SHOP_DOCS)[number] | 'sheet-plan.pdf',
+    doc: (typeof SHOP_DOCS)[number],
     q: z.infer<typeof docQuerySchema>,
     supplierFound: SupplierEntity | null,
     signal: ReturnType<typeof clientGone>,
@@ -112,18 +110,13 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
     const base = `${frame.name}-r${frame.version}`;
     const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
-    if (doc === 'sheet-plan.pdf') {
-      const report = cache.report(head, () => frameReport(frame));
-      const meta = await shopMeta(orm.em, frame, report, { paper: q.paper, units });
-      return file(await sheetPlanPdf(frameSheetPlans(report), meta), 'application/pdf', `${base}-sheet-plan.pdf`);
-    }
     const workshop = await orm.em.findOneOrFail(Workshop, { id: frame.project.workshop.id });
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
     const planning = needsPlan(doc, frozen !== null);
     const supplier = planning ? supplierFound : null;
     const shelf = planning ? await shelfOf(orm.em, frame.project.workshop.id) : [];
-    // The report, the plan and the document itself are CPU work: a worker thread does them.
+    // The report, the plans (bars and sheets) and the document itself are CPU work: a worker thread does them.
     const out = await workers.run<ShopDocumentOutput>(
       {
         task: 'shopDocument',

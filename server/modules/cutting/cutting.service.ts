@@ -4,6 +4,7 @@ import { randomUUID } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { can, type Role } from '@shared/api/roles';
 import type { CutSessionPlan, CuttingState } from '@shared/api/shop';
+import { planCutKeys } from '@shared/api/cut-plan';
 import { diffReports } from '@shared/engine/diff';
 import { UnprocessableError } from '../../errors';
 import type { FrameEntity } from '../frames/frame.entity';
@@ -26,13 +27,6 @@ export async function latestSessionKey(em: EntityManager, frameId: string): Prom
     .getConnection()
     .execute<{ id: string; frame_version: number }[]>('select id, frame_version from cut_sessions where frame_id = ? order by started_at desc limit 1', [frameId]);
   return rows[0] ? `${rows[0].id}@${rows[0].frame_version}` : null;
-}
-
-/** Which planned cuts exist in a session, by key, with their mark. */
-function cutIndex(plan: CutSessionPlan): Map<string, string> {
-  const keys = new Map<string, string>();
-  for (const p of plan.plans) p.bars.forEach((b, bi) => b.cuts.forEach((c, ci) => keys.set(`${p.profileId}/${bi}/${ci}`, c.mark)));
-  return keys;
 }
 
 export async function cuttingState(em: EntityManager, frame: FrameEntity, role: Role): Promise<CuttingState> {
@@ -99,7 +93,7 @@ export async function startSession(em: EntityManager, frame: FrameEntity, userId
 export async function tick(em: EntityManager, frameId: string, userId: string, cutKey: string): Promise<void> {
   const session = await latestSession(em, frameId);
   if (!session) throw new UnprocessableError('Cutting has not started on this frame', { cutKey: 'No cutting plan yet' });
-  const mark = cutIndex(session.plan).get(cutKey);
+  const mark = planCutKeys(session.plan).get(cutKey);
   if (!mark) throw new UnprocessableError('No such cut in the cutting plan', { cutKey: 'Unknown cut' });
   await em
     .createQueryBuilder(CutTick)

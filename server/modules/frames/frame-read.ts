@@ -51,13 +51,12 @@ export async function frameHead(em: EntityManager, userId: string, frameId: stri
        join workshops w on w.id = p.workshop_id
        left join memberships m on m.workshop_id = p.workshop_id and m.user_id = ?
        left join users u on u.id = f.saved_by_id
-      where f.id = ?`,
+      where f.id = ? and f.deleted_at is null`,
     [userId, userId, frameId],
   );
   const r = rows[0];
   if (!r || !r.role) throw new NotFoundError('Frame');
-  // The same answers as the access path: a client never sees a deleted frame, and is told 404 rather than 403.
-  if (r.role === 'client' && r.deleted_at) throw new NotFoundError('Frame');
+  // The same answers as the access path: a deleted frame is in the bin only, and a client is told 404, not 403.
   if (!can(r.role, action)) {
     if (r.role === 'client') throw new NotFoundError('Frame');
     throw new ForbiddenError();

@@ -21,8 +21,11 @@ export const Frame = defineEntity({
     savedBy: p.manyToOne(User).nullable().deleteRule('set null'),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    /** Set when it goes to the bin (see shared/api/bin.ts); purged BIN_DAYS later unless restored. */
     deletedAt: p.datetime().nullable(),
+    deletedBy: p.manyToOne(User).nullable().deleteRule('set null'),
   },
+  indexes: [{ name: 'frames_bin_idx', expression: 'create index "frames_bin_idx" on "frames" ("deleted_at") where "deleted_at" is not null' }],
   checks: [{ name: 'frames_version_positive', expression: 'version >= 1' }],
 });
 export type FrameEntity = InferEntity<typeof Frame>;

@@ -12,7 +12,8 @@ import { projectParamsSchema } from '@shared/api/projects';
 import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
-import { authorizeFrame, authorizeProject } from '../access/access.service';
+import { can } from '@shared/api/roles';
+import { authorizeBinnedFrame, authorizeFrame, authorizeProject } from '../access/access.service';
 import { frameDocumentText, frameEtag, frameHead, frameJson, notModified } from './frame-read';
 import {
   createFrame,
@@ -33,8 +34,8 @@ export function framesRouter(orm: Orm): Router {
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
     const { deleted } = parseInput(listFramesQuerySchema, req.query, 'query');
     const { role } = await authorizeProject(orm.em, userId, projectId, 'read');
-    // The recovery list of deleted frames is the shop's, not a client's.
-    if (role === 'client' && deleted === 'true') return void res.json([] satisfies FrameSummary[]);
+    // The project's part of the bin is for those who may restore from it; a client never sees the bin.
+    if (deleted === 'true' && !can(role, 'frame.write')) return void res.json([] satisfies FrameSummary[]);
     res.json((await listFrameSummaries(orm.em, projectId, deleted === 'true')) satisfies FrameSummary[]);
   });
 
@@ -95,14 +96,14 @@ export function framesRouter(orm: Orm): Router {
     const userId = currentUserId(req);
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
     const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
-    await deleteFrame(orm.em, frame);
+    await deleteFrame(orm.em, frame, userId);
     res.status(204).end();
   });
 
   router.post('/frames/:frameId/restore', async (req, res) => {
     const userId = currentUserId(req);
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
-    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const frame = await authorizeBinnedFrame(orm.em, userId, frameId);
     res.json((await restoreFrame(orm.em, frame)) satisfies FrameSummary);
   });
 

@@ -4,6 +4,7 @@ import type { Frame as FrameDto, FrameDocumentJson, FrameSummary, Revision, Revi
 import type { UserRef } from '@shared/api/common';
 import type { Role } from '@shared/api/roles';
 import { NotFoundError, UnprocessableError, VersionConflictError } from '../../errors';
+import { binCutoff } from '../access/access.service';
 import { Project, type ProjectEntity } from '../projects/project.entity';
 import { User, type UserEntity } from '../users/user.entity';
 import { checkFrameDocument, emptyFrameDocument } from './frame-document';
@@ -43,11 +44,11 @@ function touchProject(em: EntityManager, projectId: string, at: Date): Promise<n
   return em.nativeUpdate(Project, { id: projectId }, { updatedAt: at });
 }
 
-/** Live frames, or (deleted = true) only the deleted ones, most recently deleted first. */
+/** Live frames, or (deleted = true) only the ones in the bin, most recently deleted first. */
 export async function listFrameSummaries(em: EntityManager, projectId: string, deleted: boolean): Promise<FrameSummary[]> {
   const frames = await em.find(
     Frame,
-    { project: projectId, deletedAt: deleted ? { $ne: null } : null },
+    { project: projectId, deletedAt: deleted ? { $gt: binCutoff() } : null },
     { exclude: ['document'], orderBy: deleted ? { deletedAt: 'desc' } : { name: 'asc', createdAt: 'asc' } },
   );
   return frames.map(toFrameSummary);
@@ -169,14 +170,16 @@ export async function getRevision(em: EntityManager, frame: FrameEntity, version
   return { version: r.version, document: r.document, savedAt: r.savedAt.toISOString(), savedBy: userRef(r.savedBy) };
 }
 
-/** Soft delete: the frame is listed with ?deleted=true and can be restored. */
-export async function deleteFrame(em: EntityManager, frame: FrameEntity): Promise<void> {
-  frame.deletedAt ??= new Date();
+/** To the bin: listed there (and with ?deleted=true) and restorable for BIN_DAYS, then purged. */
+export async function deleteFrame(em: EntityManager, frame: FrameEntity, userId: string): Promise<void> {
+  frame.deletedAt = new Date();
+  frame.deletedBy = em.getReference(User, userId);
   await em.flush();
 }
 
 export async function restoreFrame(em: EntityManager, frame: FrameEntity): Promise<FrameSummary> {
   frame.deletedAt = null;
+  frame.deletedBy = null;
   await em.flush();
   return toFrameSummary(frame);
 }

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { computeReport, type FrameReport } from '@shared/engine/report';
+import type { FrameReport } from '@shared/engine/report';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { parseFrameDocument } from '@shared/model/parse';
 import { planShop, type ShelfOffcut, type ShopPlanResult, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
@@ -14,7 +15,8 @@ import { ensureMipSolver } from './mip';
 // and the facts printed on every page.
 
 export function frameReport(frame: FrameEntity): FrameReport {
-  return computeReport(parseFrameDocument(frame.document));
+  // With the drawers', panels' and countertop's hardware and mass, so the shop's lists match the editor's.
+  return reportWithSheetGoods(parseFrameDocument(frame.document)).report;
 }
 
 export function today(): string {

@@ -45,7 +45,7 @@ export function projectsRouter(orm: Orm): Router {
     const userId = currentUserId(req);
     const { projectId } = parseInput(projectParamsSchema, req.params, 'params');
     const { project } = await authorizeProject(orm.em, userId, projectId, 'project.delete');
-    await deleteProject(orm.em, project);
+    await deleteProject(orm.em, project, userId);
     res.status(204).end();
   });
 

@@ -3,10 +3,11 @@ import type { ProjectDetail, ProjectSummary } from '@shared/api/projects';
 import type { Role } from '@shared/api/roles';
 import { Frame } from '../frames/frame.entity';
 import { listFrameSummaries } from '../frames/frames.service';
+import { User } from '../users/user.entity';
 import { Workshop } from '../workshops/workshop.entity';
 import { Project, type ProjectEntity } from './project.entity';
 
-async function liveFrameCounts(em: EntityManager, projectIds: string[]): Promise<Map<string, number>> {
+export async function liveFrameCounts(em: EntityManager, projectIds: string[]): Promise<Map<string, number>> {
   if (projectIds.length === 0) return new Map();
   const rows = await em
     .createQueryBuilder(Frame, 'f')
@@ -17,7 +18,7 @@ async function liveFrameCounts(em: EntityManager, projectIds: string[]): Promise
   return new Map(rows.map((r) => [r.project_id, Number(r.count)]));
 }
 
-function toSummary(p: ProjectEntity, frameCount: number): ProjectSummary {
+export function toSummary(p: ProjectEntity, frameCount: number): ProjectSummary {
   return {
     id: p.id,
     name: p.name,
@@ -78,8 +79,17 @@ export async function updateProject(
   return toSummary(project, counts.get(project.id) ?? 0);
 }
 
-/** Soft delete: the row stays (with its frames) and simply stops being listed or reachable. */
-export async function deleteProject(em: EntityManager, project: ProjectEntity): Promise<void> {
+/** To the bin, with its frames: the rows stay, reachable from the bin only, until restored or purged. */
+export async function deleteProject(em: EntityManager, project: ProjectEntity, userId: string): Promise<void> {
   project.deletedAt = new Date();
+  project.deletedBy = em.getReference(User, userId);
   await em.flush();
+}
+
+export async function restoreProject(em: EntityManager, project: ProjectEntity): Promise<ProjectSummary> {
+  project.deletedAt = null;
+  project.deletedBy = null;
+  await em.flush();
+  const counts = await liveFrameCounts(em, [project.id]);
+  return toSummary(project, counts.get(project.id) ?? 0);
 }

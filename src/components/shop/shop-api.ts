@@ -11,13 +11,13 @@ import type {
   Supplier,
   SupplierInput,
 } from '@shared/api/shop';
-import { CSRF_HEADER } from '@shared/api';
+import { CSRF_HEADER, type ProjectSummary } from '@shared/api';
 import { ApiError } from '@/api';
 import { errorFromResponse } from '@/api/http';
 import { useSessionStore } from '@/stores/session';
 
-// The shop pages' calls: JSON like the rest of the app, plus multipart uploads (CSV imports, attachments), with the
-// session's CSRF token and the app's error type. Replies are the shapes in shared/api/shop.ts.
+// The shop pages' calls: JSON like the rest of the app, plus multipart uploads (CSV imports, attachments, project
+// files), with the session's CSRF token and the app's error type. Replies are the shapes in shared/api/shop.ts.
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
 
@@ -53,6 +53,10 @@ export function useShopApi() {
   };
 
   return {
+    projectFiles: {
+      /** A project file as a new project of the workshop. */
+      import: (workshopId: string, file: File) => upload<ProjectSummary>(`/workshops/${workshopId}/projects/import`, file),
+    },
     suppliers: {
       list: (workshopId: string) => call<Supplier[]>('GET', `/workshops/${workshopId}/suppliers`),
       create: (workshopId: string, body: SupplierInput) => call<Supplier>('POST', `/workshops/${workshopId}/suppliers`, body),
@@ -95,4 +99,9 @@ export type ShopApi = ReturnType<typeof useShopApi>;
 export function frameDocUrl(frameId: string, doc: string, query: Record<string, string> = {}): string {
   const q = new URLSearchParams(query).toString();
   return `/api/frames/${frameId}/shop/${doc}${q ? `?${q}` : ''}`;
+}
+
+/** Where a project's file (everything in it, to import elsewhere) is downloaded from. */
+export function projectExportUrl(projectId: string): string {
+  return `/api/projects/${projectId}/export`;
 }

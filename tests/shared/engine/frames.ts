@@ -47,3 +47,11 @@ export function module(id: string, size: [number, number, number], mass_kg: numb
     ...extra,
   };
 }
+
+/** Four 40×40 uprights at the corners of a frame whose outer size is (w + 40) × (d + 40), h tall. */
+export const cornerUprights = (w: number, d: number, h = 800): MemberInput[] => [
+  member('U1', 'z', 0, h, { x: 0, y: 0 }),
+  member('U2', 'z', 0, h, { x: w, y: 0 }),
+  member('U3', 'z', 0, h, { x: 0, y: d }),
+  member('U4', 'z', 0, h, { x: w, y: d }),
+];

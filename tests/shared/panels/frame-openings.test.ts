@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, parseCabinetSpec } from '@shared/model/cabinet-run';
-import { bayFaceOpenings, defaultSheetGoodsOptions, drawerOpenings, sheetGoods, withDrawerMass } from '@shared/panels/index';
+import { bayFaceOpenings, defaultSheetGoodsOptions, drawerOpenings, reportWithSheetGoods, sheetGoods } from '@shared/panels/index';
 
 // The example side galley (scripts/examples/side-galley-spec.json, invented): 40×40 slot 8 profile, 600 deep, 900
 // high, seat at 120, bays of module width + 2 × clearance between the uprights' inner faces. Side-mount slides take
@@ -41,10 +41,29 @@ describe('openings read off the example galley', () => {
     expect(top?.width_mm).toBeCloseTo(620, 9);
     expect(g.mass.total_kg).toBeGreaterThan(0);
   });
-  it('the drawers’ sheet mass reaches the report: its total rises by exactly their mass', () => {
+  it('the sheet goods’ mass reaches the report: its module mass rises by exactly their mass, and the loads with it', () => {
     const g = sheetGoods(report, defaultSheetGoodsOptions());
-    const drawerKg = g.parts.filter((p) => g.drawers.some((d) => d.opening.module_id === p.owner)).reduce((a, p) => a + p.mass_kg, 0);
-    const after = computeReport(withDrawerMass(doc, g));
-    expect(after.mass.total_kg - report.mass.total_kg).toBeCloseTo(drawerKg, 3); // the report rounds its masses
+    const { report: after } = reportWithSheetGoods(doc);
+    expect(after.mass.modules_kg - report.mass.modules_kg).toBeCloseTo(g.mass.total_kg, 3); // the report rounds its masses
+    const load = (r: typeof report) => r.loads.members.reduce((a, c) => a + (c.utilisation ?? 0), 0);
+    expect(load(after)).toBeGreaterThan(load(report));
+    // The drawer's own box and face go to its own module.
+    const drawerKg = g.parts.filter((p) => p.owner === 'cooler-drawer').reduce((a, p) => a + p.mass_kg, 0);
+    const before = report.modules.find((m) => m.id === 'cooler-drawer')?.mass_kg ?? 0;
+    expect((after.modules.find((m) => m.id === 'cooler-drawer')?.mass_kg ?? 0) - before).toBeGreaterThanOrEqual(drawerKg - 1e-3);
+  });
+  it('the goods’ hardware joins the hardware list with spares: slides, their screws into T-nuts, panel screws and drop-in T-nuts', () => {
+    const g = sheetGoods(report, defaultSheetGoodsOptions());
+    const { report: after } = reportWithSheetGoods(doc);
+    const goodsLines = after.hardware.lines.filter((l) => l.key.startsWith('goods|'));
+    expect(goodsLines.map((l) => l.count)).toEqual(g.hardware.map((l) => l.qty));
+    const slides = goodsLines.find((l) => l.name.startsWith('Drawer slide pair'));
+    expect(slides?.length_mm).toBe(500);
+    expect(slides?.count).toBe(g.drawers.length);
+    const tnuts = goodsLines.find((l) => l.kind === 't-nut');
+    expect(tnuts?.count).toBe(g.hardware.find((l) => l.item === 'T-nut, drop-in')?.qty);
+    for (const l of goodsLines) expect(l.order_qty).toBe(Math.ceil((l.count * (100 + after.hardware.spares_pct)) / 100 - 1e-9));
+    // The frame's own lines are all still there.
+    expect(after.hardware.lines.length - goodsLines.length).toBe(report.hardware.lines.length);
   });
 });

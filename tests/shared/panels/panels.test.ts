@@ -18,6 +18,11 @@ describe('bay panels on the example frame', () => {
   it('in the slot: a 9 mm panel does not pass an 8 mm slot, and the error names the thickness', () => {
     expect(errorOf(() => bayPanel({ name: 'Side', opening, mount: 'slot', thickness_mm: 9, slot_mm: 8, profile_mm: 40 })).field).toBe('thickness_mm');
   });
+  it('in the slot: an engagement deeper than the slot is refused, naming the engagement; one within it is taken', () => {
+    expect(errorOf(() => bayPanel({ name: 'Side', opening, mount: 'slot', thickness_mm: 6, slot_mm: 8, profile_mm: 40, engagement_mm: 10, slotDepth_mm: 9 })).field).toBe('engagement_mm');
+    // 560 + 2·6 − 1 = 571 (common practice, no source: play of 1 mm in all).
+    expect(bayPanel({ name: 'Side', opening, mount: 'slot', thickness_mm: 6, slot_mm: 8, profile_mm: 40, engagement_mm: 6, slotDepth_mm: 9 }).part.length_mm).toBeCloseTo(571, 9);
+  });
   it('surface-mounted: covers the members, 640 × 760, with ⌈640/300⌉·2 + ⌈760/300⌉·2 = 12 screws and drop-in T-nuts', () => {
     const p = bayPanel({ name: 'Side', opening, mount: 'surface', thickness_mm: 15, slot_mm: 8, profile_mm: 40 });
     expect(p.part.length_mm).toBe(640);
