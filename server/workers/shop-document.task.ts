@@ -9,6 +9,7 @@ import { partLabels } from '@shared/shop/labels';
 import { orderList } from '@shared/shop/order-list';
 import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
+import { ensureMipSolver } from '../modules/orders/mip';
 import { planShop, type ShelfOffcut, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
 import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../pdf';
@@ -56,6 +57,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
   let planned = null;
   if (needsPlan(doc, frozen !== null)) {
     if (report.cut_list.length === 0) throw new InputError('frame', 'This frame has no members to cut yet');
+    await ensureMipSolver();
     planned = await planShop(report, input.offers, input.shelf, input.settings, input.timeLimitMs);
   }
   const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
