@@ -156,6 +156,12 @@ function orShifted(a: Uint32Array, row: number, w: number, shift: number): void 
 /** Largest table (32-bit words) the bar-by-bar search may build; beyond it (long bars in fine units) it is skipped. */
 const MAX_TABLE_WORDS = 4_000_000;
 
+/**
+ * Most parts for the exact cover: on longer three-part lists (500 parts) it seldom ends within its budget, and the
+ * time is better left to the LP and its dives.
+ */
+const MAX_COVER_PIECES = 320;
+
 export interface PerfectPackOptions {
   /** Bars placed by the bar-by-bar search, and nodes of the exact-cover search. */
   fillNodes: number;
@@ -170,12 +176,16 @@ export interface PerfectPackOptions {
  */
 export function perfectPack(sizes: ArrayLike<number>, demand: ArrayLike<number>, cap: number, opts: PerfectPackOptions): Int32Array[] | null {
   let active = 0;
-  for (let i = 0; i < sizes.length; i++) if (demand[i] > 0) active++;
+  let pieces = 0;
+  for (let i = 0; i < sizes.length; i++) {
+    if (demand[i] > 0) active++;
+    pieces += demand[i];
+  }
   if ((active + 1) * ((cap >> 5) + 1) <= MAX_TABLE_WORDS) {
     const r = perfectFill(sizes, demand, cap, { nodeLimit: opts.fillNodes, restartNodes: opts.fillNodes, outOfTime: opts.outOfTime });
     if (r && r.rest.every((c) => c === 0)) return r.bars;
   }
-  if (opts.outOfTime()) return null;
+  if (opts.outOfTime() || pieces > MAX_COVER_PIECES) return null;
   const sets = exactFillSets(sizes, demand, cap, 3);
   return sets ? exactCoverPack(sizes, demand, sets, opts.coverNodes, opts.outOfTime) : null;
 }
