@@ -9,6 +9,7 @@ import { partLabels } from '@shared/shop/labels';
 import { orderList } from '@shared/shop/order-list';
 import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
+import { ensureMipSolver } from '../modules/orders/mip';
 import { planShop, type ShelfOffcut, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
 import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../pdf';
@@ -58,6 +59,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
   if (needsPlan(doc, frozen !== null)) {
     if (report.cut_list.length === 0) throw new InputError('frame', 'This frame has no members to cut yet');
     const settings = { trim_mm: input.settings.trim_mm ?? report.settings.trim_mm, minOffcut_mm: input.settings.minOffcut_mm ?? report.settings.min_offcut_mm };
+    await ensureMipSolver();
     planned = await planShop(report, input.offers, input.shelf, settings, input.timeLimitMs);
   }
   const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
