@@ -2,19 +2,22 @@
 // database with the demo data, the server as `npm start` runs it (production mode) on BENCH_PORT, and for each
 // scenario (scripts/bench-api/scenarios.ts) autocannon with 50 connections for a bounded time, while a probe in
 // its own thread calls /api/health every 20 ms. Prints throughput, latency p50/p99, errors, and the probe's p50,
-// p99 and worst stall. Target: the probe's p99 under 100 ms during "plan + 4 PDFs".
+// p99 and worst stall. Target: the probe's p99 under 100 ms during "plan + 4 PDFs". Then the repeated reads as
+// ratios to /api/auth/me in the same run (scripts/bench-api/cache-reads.ts; 5 s per route, --cache-seconds N).
 import { Worker } from 'node:worker_threads';
 import { availableParallelism, loadavg } from 'node:os';
 import { prepareDatabase, startServer, stopProcess, waitForHealth } from './lib/app-env.ts';
+import { cacheReads } from './bench-api/cache-reads.ts';
 import { signIn } from './bench-api/client.ts';
 import { SCENARIOS, type World } from './bench-api/scenarios.ts';
 
 function args(argv: string[]) {
-  const out = { durationS: 10, connections: 50, only: [] as string[] };
+  const out = { durationS: 10, connections: 50, only: [] as string[], cacheSeconds: 5 };
   for (let i = 0; i < argv.length; i++) {
     if (argv[i] === '--duration') out.durationS = Number(argv[++i]);
     else if (argv[i] === '--connections') out.connections = Number(argv[++i]);
     else if (argv[i] === '--only') out.only.push(argv[++i]);
+    else if (argv[i] === '--cache-seconds') out.cacheSeconds = Number(argv[++i]);
     else throw new Error(`unknown argument ${argv[i]}`);
   }
   return out;
@@ -90,6 +93,10 @@ try {
   }
   const widths = rows[0].map((_, c) => Math.max(...rows.map((r) => r[c].length)));
   for (const r of rows) console.log(r.map((cell, c) => cell.padEnd(widths[c])).join('  '));
+  if (opts.only.length === 0) {
+    await settle(world);
+    console.log(`\n${(await cacheReads(caller, project.id, opts.cacheSeconds)).join('\n')}`);
+  }
 } finally {
   await stopProcess(server);
 }

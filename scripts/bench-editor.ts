@@ -175,7 +175,9 @@ async function measureSize(page: Page, bays: number, reps: number): Promise<Size
     push(r.coldTask, c.task);
   }
   await settle(page, 1000);
-  const mid = Math.floor(bays / 2);
+  // Long frames are several runs: act in the middle of the first one, whose uprights are `run-u<k>-f`.
+  const firstRunBays = doc.members.filter((m) => /^run-u\d+-f$/.test(m.id)).length - 1;
+  const mid = Math.floor(firstRunBays / 2);
   const uprights = [`run-u${mid}-f`, `run-u${mid + 2}-f`];
 
   // Select: a click on one upright, then on another.

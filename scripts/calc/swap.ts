@@ -1,4 +1,4 @@
-import { trySwapModules } from '@shared/editing/bays';
+import { trySwapModules } from '@shared/editing/swap';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { parseFrameDocument } from '@shared/model/parse';
 import { readJson } from './read-json';

@@ -1,4 +1,5 @@
 import type { Content, ContentCanvas, TDocumentDefinitions } from 'pdfmake/interfaces';
+import { dateText } from '@shared/display/format';
 import type { ShopMeta } from '@shared/shop/types';
 
 // The look every shop document shares: Barlow, black on white (they are photocopied and taped near the saw),
@@ -18,7 +19,7 @@ export const checkbox = (size = 11): ContentCanvas => ({
 });
 
 export function metaLine(meta: ShopMeta): string {
-  return `${meta.project} · ${meta.frame} · revision ${meta.revision} · ${meta.date}`;
+  return `${meta.project} · ${meta.frame} · revision ${meta.revision} · ${dateText(meta.date, meta.units)}`;
 }
 
 /** A label/value row for the header block ("Kerf  3 mm"). */

@@ -38,6 +38,8 @@ export async function orderListPdf(order: OrderList, meta: ShopMeta, info: Order
     const body: TableCell[][] = [th(['Profile', 'Bar length', 'Qty', 'Unit price', 'Cost'], 2)];
     for (const p of order.profiles) {
       for (const l of p.order.stock.lines) {
+        // Offcuts from the shop's own shelf are not bought: the supplier's copy leaves them out.
+        if (info.forSupplier && l.onHand) continue;
         body.push([
           { text: [{ text: p.profileName, bold: true }, l.onHand ? { text: '  offcut on hand', color: MUTED, italics: true } : ''] },
           len(l.stockLength),

@@ -1,5 +1,6 @@
 import { InputError } from '@shared/errors';
 import { planCuts } from '@shared/planner';
+import { ensureMipSolver } from '../modules/orders/mip';
 import type { CutJob } from '@shared/planner/job';
 import { readProjectFile } from './project-file.task';
 import { shopDocument, type ShopDocumentInput } from './shop-document.task';
@@ -19,6 +20,8 @@ export default async function run(t: HeavyTask): Promise<HeavyResult> {
   try {
     switch (t.task) {
       case 'plan':
+        // The same exact solver as the command line and the browser: HiGHS, loaded once per worker thread.
+        await ensureMipSolver();
         return { ok: true, value: await planCuts(t.job, { timeLimitMs: t.timeLimitMs }) };
       case 'shopDocument':
         return { ok: true, value: await shopDocument(t.input) };

@@ -9,6 +9,7 @@ import { partLabels } from '@shared/shop/labels';
 import { orderList } from '@shared/shop/order-list';
 import { pickSheet } from '@shared/shop/pick-list';
 import { sawSheet } from '@shared/shop/saw-list';
+import { ensureMipSolver } from '../modules/orders/mip';
 import { planShop, type ShelfOffcut, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
 import { drillListPdf, labelsPdf, pickListPdf, sawListPdf, sheetPlanPdf } from '../pdf';
@@ -28,7 +29,8 @@ export interface ShopDocumentInput {
   frozen: CutSessionPlan | null;
   offers: StockOffer[];
   shelf: ShelfOffcut[];
-  settings: { trim_mm: number; minOffcut_mm: number };
+  /** Asked for this document; left out, the frame's own trim and shortest offcut apply. */
+  settings: { trim_mm?: number; minOffcut_mm?: number };
   timeLimitMs: number;
   currency: string;
   cutFee: number;
@@ -52,12 +54,14 @@ const CSV = 'text/csv; charset=utf-8';
 export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocumentOutput> {
   const frame = parseFrameDocument(input.document);
   const report = reportWithSheetGoods(frame).report;
-  const meta: ShopMeta = { ...input.meta, units: input.meta.units ?? report.units };
+  const meta: ShopMeta = { ...input.meta, units: { ...report.units, ...input.meta.units } };
   const { doc, frozen } = input;
   let planned = null;
   if (needsPlan(doc, frozen !== null)) {
     if (report.cut_list.length === 0) throw new InputError('frame', 'This frame has no members to cut yet');
-    planned = await planShop(report, input.offers, input.shelf, input.settings, input.timeLimitMs);
+    const settings = { trim_mm: input.settings.trim_mm ?? report.settings.trim_mm, minOffcut_mm: input.settings.minOffcut_mm ?? report.settings.min_offcut_mm };
+    await ensureMipSolver();
+    planned = await planShop(report, input.offers, input.shelf, settings, input.timeLimitMs);
   }
   const cutList = frozen?.cutList ?? planned?.cutList ?? shopCutList(report);
   switch (doc) {
@@ -72,7 +76,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
     case 'cut-list.csv':
       return { body: cutListCsv(cutList, meta.units), contentType: CSV, suffix: 'cut-list.csv' };
     case 'order-list.csv':
-      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee })), contentType: CSV, suffix: 'order-list.csv' };
+      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee }), meta.units), contentType: CSV, suffix: 'order-list.csv' };
     case 'sheet-plan.pdf':
       return { body: await sheetPlanPdf(frameSheetPlans(frame, report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }

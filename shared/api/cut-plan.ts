@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dateFormatSchema } from '../model/settings';
 import { LIMITS, lengthMm } from '../limits';
 import type { CutSessionPlan } from './shop';
 import { text } from './common';
@@ -73,7 +74,13 @@ export const cutSessionPlanSchema = z.object({
   plans: many(profilePlanSchema, LIMITS.profiles),
   members: many(z.object({ id: words(64), mark: words(40), profile: words(64), cut_length_mm: lengthMm() }), LIMITS.members),
   settings: z.object({ trim_mm: lengthMm(), minOffcut_mm: lengthMm() }),
-  units: z.object({ display: z.enum(['mm', 'in']), frac: z.union([z.literal(16), z.literal(32)]) }),
+  // mass and date are absent on plans frozen before a frame had them.
+  units: z.object({
+    display: z.enum(['mm', 'in']),
+    frac: z.union([z.literal(16), z.literal(32)]),
+    mass: z.enum(['kg', 'lb']).optional(),
+    date: dateFormatSchema.optional(),
+  }),
 }) satisfies z.ZodType<CutSessionPlan>;
 
 /** Which planned cuts a plan has, by the key a tick names (`profile/bar/cut`), with their mark. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { idSchema, isoDateSchema, nameSchema, userRefSchema } from './common';
+import type { RevisionDiff } from '../engine/revision-diff';
+import { idSchema, isoDateSchema, nameSchema, text, userRefSchema } from './common';
 import { roleSchema } from './roles';
 
 export const frameParamsSchema = z.object({ frameId: idSchema });
@@ -76,13 +77,58 @@ export const revisionSummarySchema = z.object({
   savedBy: userRefSchema.nullable(),
   memberCount: z.number().int(),
   current: z.boolean(),
+  /** "sent to client", "as cut"…; null when unnamed. */
+  name: z.string().nullable(),
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 
 export const revisionSchema = z.object({
   version: z.number().int(),
+  name: z.string().nullable(),
   document: frameDocumentJsonSchema,
   savedAt: isoDateSchema,
   savedBy: userRefSchema.nullable(),
 });
 export type Revision = z.infer<typeof revisionSchema>;
+
+/**
+ * Saves by one person with less than this between them are one editing stretch, kept as one revision (the last
+ * state of the stretch). A longer pause, another person's save, leaving the editor or "Save revision" ends it.
+ */
+export const REVISION_PAUSE_MINUTES = 10;
+
+const versionSchema = z.coerce.number({ message: 'Must be a whole number' }).int({ message: 'Must be a whole number' }).min(1, { message: 'At least 1' });
+
+const revisionNameSchema = text(
+  z.string({ message: 'Must be text' }).trim().max(80, { message: 'At most 80 characters' }),
+).transform((v) => (v === '' ? null : v));
+
+/** POST /api/frames/:frameId/revisions: end the editing stretch at the current version, optionally naming it. */
+export const keepRevisionRequestSchema = z.object({
+  /** The version the caller is looking at; 409 when a newer save came in meanwhile. */
+  baseVersion: versionSchema,
+  name: revisionNameSchema.nullable().optional(),
+});
+export type KeepRevisionRequest = z.input<typeof keepRevisionRequestSchema>;
+
+/** PATCH /api/frames/:frameId/revisions/:version: name (or, with an empty name, unname) a kept revision. */
+export const nameRevisionRequestSchema = z.object({ name: revisionNameSchema.nullable() });
+export type NameRevisionRequest = z.input<typeof nameRevisionRequestSchema>;
+
+/** POST /api/frames/:frameId/revisions/:version/restore: that revision's document becomes a new save. */
+export const restoreRevisionRequestSchema = z.object({ baseVersion: versionSchema });
+export type RestoreRevisionRequest = z.input<typeof restoreRevisionRequestSchema>;
+
+/** GET /api/frames/:frameId/revisions/compare?from=&to= */
+export const compareRevisionsQuerySchema = z.object({ from: versionSchema, to: versionSchema });
+
+export type RevisionComparison = {
+  from: Omit<Revision, 'document'>;
+  to: Omit<Revision, 'document'>;
+  diff: RevisionDiff;
+};
+/** Checked for shape only; the server's engine made it. */
+export const revisionComparisonSchema = z.custom<RevisionComparison>(
+  (v) => typeof v === 'object' && v !== null && 'diff' in v && 'from' in v && 'to' in v,
+  { message: 'Not a comparison of two revisions' },
+);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { WhatChanged } from '../engine/diff';
 import type { CsvRowError } from '../shop/csv-import';
-import type { OrderList, ProfilePlan, ShopCutList, ShopMeta } from '../shop/types';
+import type { OrderList, ProfilePlan, ShopCutList, ShopMeta, ShopUnits } from '../shop/types';
 import { idSchema, nameSchema, text, userRefSchema } from './common';
 
 // Shop outputs and ordering: suppliers, orders, the saw's cutting state, shelf stock, imports and attachments.
@@ -52,10 +52,11 @@ export const orderModeSchema = z.enum(['stock', 'cut-to-length']);
 export const paperSchema = z.enum(['A4', 'LETTER']);
 export const shopUnitsSchema = z.object({ display: z.enum(['mm', 'in']), frac: z.union([z.literal(16), z.literal(32)]) });
 
-/** Shop-floor settings for a plan: trim cut at the start of each bar and the shortest offcut worth keeping. */
+/** Shop-floor settings for one plan: trim cut at the start of each bar and the shortest offcut worth keeping; left
+ * out, the frame's own settings apply. */
 export const shopSettingsSchema = z.object({
-  trim_mm: z.number().min(0, { message: 'Must not be negative' }).max(200, { message: 'At most 200 mm' }).default(10),
-  minOffcut_mm: z.number().min(0, { message: 'Must not be negative' }).max(3000, { message: 'At most 3000 mm' }).default(150),
+  trim_mm: z.number().min(0, { message: 'Must not be negative' }).max(200, { message: 'At most 200 mm' }).optional(),
+  minOffcut_mm: z.number().min(0, { message: 'Must not be negative' }).max(3000, { message: 'At most 3000 mm' }).optional(),
 });
 
 export const createOrderSchema = z.object({
@@ -104,6 +105,16 @@ export type OrderSummary = {
 };
 export type OrderDetail = OrderSummary & { contents: OrderContents };
 
+/** GET /api/orders/:orderId/order.pdf?copy=: the shop's copy (both ways of buying) or the one the supplier gets. */
+export const orderPdfQuerySchema = z.object({
+  copy: z.enum(['shop', 'supplier'], { message: "Must be 'shop' or 'supplier'" }).default('shop'),
+  /** inline: shown in the page (the preview before sending) rather than downloaded. */
+  view: z.enum(['inline', 'download'], { message: "Must be 'inline' or 'download'" }).default('download'),
+});
+
+/** GET /api/orders/:orderId/send-preview: the e-mail "Send to supplier" would send, exactly. */
+export type SendPreview = { to: string; subject: string; text: string; attachment: { filename: string; url: string } };
+
 // ----- cutting at the saw -----
 
 export type CutSessionPlan = {
@@ -113,7 +124,7 @@ export type CutSessionPlan = {
   /** The parts as they were when cutting started, for the what-changed reuse plan. */
   members: { id: string; mark: string; profile: string; cut_length_mm: number }[];
   settings: { trim_mm: number; minOffcut_mm: number };
-  units: { display: 'mm' | 'in'; frac: 16 | 32 };
+  units: ShopUnits;
 };
 
 export type CutTickView = { cutKey: string; mark: string; tickedBy: z.infer<typeof userRefSchema> | null; tickedAt: string };
@@ -123,7 +134,9 @@ export type CuttingState = {
   frameName: string;
   projectName: string;
   currentVersion: number;
-  session: { id: string; frameVersion: number; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
+  /** What cutting depends on in the design as saved now (see cuttingKey); the banner compares it with the session's. */
+  currentCuttingKey: string;
+  session: { id: string; frameVersion: number; cuttingKey: string; startedAt: string; startedBy: { id: string; name: string } | null; plan: CutSessionPlan } | null;
   ticks: CutTickView[];
   /** The design changed since cutting started: how the parts already cut are reused in the new design. */
   reuse: WhatChanged | null;

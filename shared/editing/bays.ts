@@ -57,7 +57,7 @@ function renumberBoundaries(doc: FrameDocument, run: Run, to: (k: number) => num
 }
 
 const bayDatum = (bayId: string, which: 'start' | 'mid' | 'end') => `${bayId}.${which}`;
-const refersToBay = (m: Member, bayId: string) => datumsOfMember(m).some((d) => d.startsWith(`${bayId}.`));
+export const refersToBay = (m: Member, bayId: string) => datumsOfMember(m).some((d) => d.startsWith(`${bayId}.`));
 const atBoundary = (m: Member, run: Run, k: number) => datumsOfMember(m).includes(`${run.id}.u${k}`);
 
 /** A bay's rails: members along the run from its start to its end that carry no module of their own. */
@@ -105,7 +105,7 @@ function renumberName(name: string | undefined, prefix: 'Upright' | 'Cross-membe
 }
 
 /** Names of the layout's members that say which upright or bay they belong to, brought up to date. */
-function renameByPlace(doc: FrameDocument, run: Run): FrameDocument {
+export function renameByPlace(doc: FrameDocument, run: Run): FrameDocument {
   const re = boundaryRe(run);
   const bayIndex = new Map(run.bays.map((b, i) => [b.id, i]));
   const members = doc.members.map((m) => {
@@ -228,9 +228,10 @@ export function moveBay(doc: FrameDocument, bayId: string, toIndex: number): Edi
   const bays = run.bays.slice();
   bays.splice(index, 1);
   bays.splice(to, 0, bay);
+  const moved = { ...run, bays };
   return {
     ok: true,
-    doc: { ...doc, runs: doc.runs.map((r) => (r.id === run.id ? { ...r, bays } : r)) },
+    doc: renameByPlace({ ...doc, runs: doc.runs.map((r) => (r.id === run.id ? moved : r)) }, moved),
     label: `Move ${bayWords(run, index)} to place ${to + 1}`,
   };
 }
@@ -381,52 +382,4 @@ export function moveModuleOutOfRun(doc: FrameDocument, moduleId: string): EditOu
     doc: { ...doc, modules, runs: doc.runs.map((r) => (r.id === from.run.id ? { ...r, bays: r.bays.map((b) => (b.id === bay.id ? bay : b)) } : r)) },
     label: `Take ${moduleLabel(mod)} out of ${bayWords(from.run, from.index)}`,
   };
-}
-
-/**
- * Swap two modules. In one run their bays change places (with whatever else each bay holds above or below, and
- * the members that carry them); the uprights between re-lay. In two runs, two modules alone in their bays and
- * carried the same way change bays. Otherwise the reason is given in plain words.
- */
-export function trySwapModules(doc: FrameDocument, a: string, b: string): EditOutcome {
-  const ma = doc.modules.find((m) => m.id === a);
-  const mb = doc.modules.find((m) => m.id === b);
-  if (!ma || !mb) return refuse('One of those modules is no longer in the frame.');
-  const na = moduleLabel(ma);
-  const nb = moduleLabel(mb);
-  if (a === b) return refuse(`Pick two different modules to swap; both picks are ${na}.`);
-  const pa = placeOfModule(doc, a);
-  const pb = placeOfModule(doc, b);
-  const free = !pa ? na : !pb ? nb : null;
-  if (free) {
-    return refuse(`${capital(free)} stands free, in no bay of a run, so the frame cannot re-lay around it. Make bays from the frame’s uprights, or move it into an open bay, then swap.`);
-  }
-  const A = pa as NonNullable<typeof pa>;
-  const B = pb as NonNullable<typeof pb>;
-  if (A.bay.id === B.bay.id) {
-    return refuse(`${capital(na)} and ${nb} are stacked in the same bay; a swap exchanges bays. Resize them, or move one out of the run and into another bay.`);
-  }
-  if (A.run.id === B.run.id) {
-    const bays = A.run.bays.slice();
-    bays[A.index] = B.bay;
-    bays[B.index] = A.bay;
-    const stacked = bayModuleIds(A.bay).length > 1 || bayModuleIds(B.bay).length > 1;
-    return {
-      ok: true,
-      doc: { ...doc, runs: doc.runs.map((r) => (r.id === A.run.id ? { ...r, bays } : r)) },
-      label: stacked ? `Swap the bays of ${na} and ${nb}` : `Swap ${na} and ${nb}`,
-    };
-  }
-  if (bayModuleIds(A.bay).length > 1 || bayModuleIds(B.bay).length > 1) {
-    return refuse(`${capital(na)} and ${nb} are in different runs and one of them is stacked with other modules; only a module alone in its bay can change runs.`);
-  }
-  if (ma.bearing !== mb.bearing) {
-    const how = { base: 'sits on bearers', hung: 'hangs from the top', 'side-rails': 'runs on side rails' } as const;
-    return refuse(`${capital(na)} ${how[ma.bearing]} and ${nb} ${how[mb.bearing]}; in different runs their bays carry them differently. Move each into an open bay instead.`);
-  }
-  const runs = doc.runs.map((r) => {
-    if (r.id !== A.run.id && r.id !== B.run.id) return r;
-    return { ...r, bays: r.bays.map((bay) => (bay.id === A.bay.id ? { ...bay, module: b } : bay.id === B.bay.id ? { ...bay, module: a } : bay)) };
-  });
-  return { ok: true, doc: { ...doc, runs }, label: `Swap ${na} and ${nb}` };
 }

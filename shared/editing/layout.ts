@@ -1,3 +1,4 @@
+import { moduleTitle } from '../model/module';
 import type { Box } from '../engine/box';
 import { profileTable } from '../engine/profile-table';
 import { resolveDatums, type ResolvedDatums } from '../engine/resolve-datums';
@@ -39,7 +40,7 @@ export function layoutOf(doc: FrameDocument): Layout {
     modules: modules.map((g) => ({
       id: g.module.id,
       index: g.index,
-      name: g.module.name ?? g.module.id,
+      name: moduleTitle(g.module),
       kind: g.module.kind,
       box: g.box,
       mass_kg: g.mass_kg,

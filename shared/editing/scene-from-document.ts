@@ -1,3 +1,4 @@
+import { moduleTitle } from '../model/module';
 import type { Box } from '../engine/box';
 import { profileTable } from '../engine/profile-table';
 import { resolveDatums } from '../engine/resolve-datums';
@@ -65,7 +66,7 @@ export function sceneFromDocument(doc: FrameDocument, previous: Scene | null): S
   const modules: SceneModule[] = resolveModules(doc, datums, geometry, (g) => members[g.index].box).map((g, index) => ({
     id: g.module.id,
     index,
-    name: g.module.name ?? g.module.id,
+    name: moduleTitle(g.module),
     kind: g.module.kind,
     box: g.box,
     mass_kg: g.mass_kg,

@@ -1,3 +1,4 @@
+import { moduleTitle } from '../model/module';
 import type { Box } from '../engine/box';
 import type { FrameReport } from '../engine/report';
 import { profileTable } from '../engine/profile-table';
@@ -46,7 +47,7 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport, sheetGo
   const modules: SceneModule[] = report.modules.map((m, index) => ({
     id: m.id,
     index,
-    name: m.name ?? m.id,
+    name: moduleTitle({ name: m.name ?? undefined, kind: m.kind }),
     kind: m.kind,
     box: toBox(m.min_mm, m.max_mm),
     mass_kg: m.mass_kg,

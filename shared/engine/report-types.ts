@@ -1,3 +1,4 @@
+import type { DateFormat } from '../model/settings';
 import type { Axis, Vec3 } from '../model/axis';
 import type { Bearing, ModuleKind } from '../model/module';
 import type { MemberRole } from '../model/member';
@@ -17,7 +18,7 @@ import type { ReportWarning } from './warnings';
 export type FrameReport = {
   report_version: 1;
   name: string;
-  units: { display: 'mm' | 'in'; frac: 16 | 32 };
+  units: { display: 'mm' | 'in'; frac: 16 | 32; mass: 'kg' | 'lb'; date: DateFormat; decimal_comma: boolean };
   settings: ReportSettings;
   datums: { id: string; axis: Axis; value_mm: number }[];
   bays: ReportBay[];
@@ -34,6 +35,9 @@ export type FrameReport = {
 
 export type ReportSettings = {
   kerf_mm: number;
+  /** Squaring cut at the start of each bar, and the shortest leftover kept as an offcut. */
+  trim_mm: number;
+  min_offcut_mm: number;
   machining_allowance_mm: number;
   tolerance_class: ToleranceClass;
   tolerance_standard: string;

@@ -270,9 +270,11 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   return {
     report_version: 1,
     name: doc.name,
-    units: { display, frac },
+    units: { display, frac, mass: doc.units.mass, date: doc.units.date, decimal_comma: doc.units.decimalComma },
     settings: {
       kerf_mm: s.kerf_mm,
+      trim_mm: s.trim_mm,
+      min_offcut_mm: s.minOffcut_mm,
       machining_allowance_mm: s.machiningAllowance_mm,
       tolerance_class: s.toleranceClass,
       tolerance_standard: TOLERANCE_CLASS_NAMES[s.toleranceClass],

@@ -166,10 +166,14 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
     /**
      * Where the members under (or over) a module stand along the run, a quarter profile in from its sides: from
      * the bay's edges for the widest module of the bay, from the module's own sides (datums that follow its width)
-     * for a narrower one in a stack.
+     * for a narrower one in a stack or in a bay of a fixed, greater width.
      */
+    const fills = bay.width_mm === undefined || bay.width_mm <= widest + 2 * clearance + 1e-6;
+    // The opening between the bay's edges, where slide rails stand.
+    const inside = fills ? widest + 2 * clearance : (bay.width_mm as number);
     const sidePlaces = (m: CabinetModule): [PositionInput, PositionInput] => {
-      if (m.size.w_mm >= widest) {
+      // A bay wider than its modules (a fixed width) carries each one from its own sides, as it stands centred.
+      if (m.size.w_mm >= widest && fills) {
         const inset = clearance + t / 4;
         return [at(`${bay.id}.start`, 'min', inset), at(`${bay.id}.end`, 'max', -inset)];
       }
@@ -241,8 +245,8 @@ export function buildCabinetRun(input: CabinetSpec): FrameDocument {
         bearing: m.bearing,
         // Its slides span the gap to the rails at the bay's edges (the clearance, more beside a narrower module
         // in a stack, on packers); a wider gap than slides usually take is still the way this module bears.
-        ...(m.bearing === 'side-rails' && clearance + (widest - m.size.w_mm) / 2 > DEFAULT_SIDE_GAP_MM
-          ? { sideGap_mm: Math.round((clearance + (widest - m.size.w_mm) / 2) * 1000) / 1000 + 1 }
+        ...(m.bearing === 'side-rails' && (inside - m.size.w_mm) / 2 > DEFAULT_SIDE_GAP_MM
+          ? { sideGap_mm: Math.round(((inside - m.size.w_mm) / 2) * 1000) / 1000 + 1 }
           : {}),
         place: { y: inFront, z },
       });

@@ -90,7 +90,8 @@ export const moduleSchema = z
 export type Module = z.output<typeof moduleSchema>;
 export type ModuleInput = z.input<typeof moduleSchema>;
 
-const KIND_WORDS: Readonly<Record<ModuleKind, string>> = {
+/** A module's kind in words ("drawer stack"), as the builder reads it. */
+export const KIND_WORDS: Readonly<Record<ModuleKind, string>> = {
   appliance: 'appliance',
   sink: 'sink',
   'drawer-stack': 'drawer stack',
@@ -106,6 +107,14 @@ const KIND_WORDS: Readonly<Record<ModuleKind, string>> = {
 export function moduleLabel(m: Pick<Module, 'name' | 'kind'>): string {
   const name = m.name?.trim();
   return name ? `“${name}”` : `the ${KIND_WORDS[m.kind]}`;
+}
+
+/** A module's name for a list or a heading: the name they gave it, else its kind ("Drawer stack"), never its id. */
+export function moduleTitle(m: Pick<Module, 'name' | 'kind'>): string {
+  const name = m.name?.trim();
+  if (name) return name;
+  const words = KIND_WORDS[m.kind];
+  return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 /** The three ways a module bears, in the words the editor offers them. */

@@ -43,11 +43,29 @@ export const settingsSchema = z.strictObject({
   alloy: z.enum(ALLOY_IDS as [AlloyId, ...AlloyId[]]).optional(),
   tNut: z.enum(['slide-in', 'drop-in']).default('slide-in'),
   defaultJoin: storable(z.string().min(1).max(64)).default('corner-bracket'),
+  // 10 mm squares the mill end of a bar; 150 mm is about the shortest piece a saw's clamp still holds safely
+  // (common practice, no source).
+  /** The profile new members are drawn in, until the builder picks another. */
+  defaultProfile: storable(z.string().min(1).max(64)).optional(),
+  trim_mm: z.number().min(0, 'must not be negative').max(200, 'must be at most 200 mm').default(10),
+  minOffcut_mm: z.number().min(0, 'must not be negative').max(3000, 'must be at most 3000 mm').default(150),
 });
 export type FrameSettings = z.output<typeof settingsSchema>;
 
+/** How dates are written: ISO 8601 (2026-12-02), day first (02/12/2026 or 02.12.2026) or month first (12/02/2026). */
+export const DATE_FORMATS = ['iso', 'dmy', 'dmy-dot', 'mdy'] as const;
+export const dateFormatSchema = z.enum(DATE_FORMATS);
+export type DateFormat = z.infer<typeof dateFormatSchema>;
+
+/**
+ * How a frame's figures are read and typed: lengths in mm or in inches to 1/16 or 1/32, masses in kg or lb, the
+ * date format, and whether a typed "1,5" is a decimal comma. Inside, lengths stay millimetres and masses kilograms.
+ */
 export const displayUnitsSchema = z.strictObject({
   display: z.enum(['mm', 'in']).default('mm'),
   frac: z.union([z.literal(16), z.literal(32)]).default(16),
+  mass: z.enum(['kg', 'lb']).default('kg'),
+  date: dateFormatSchema.default('iso'),
+  decimalComma: z.boolean().default(false),
 });
 export type DisplayUnits = z.output<typeof displayUnitsSchema>;

@@ -52,31 +52,32 @@ function start(job: CutJob, opts: PlanOptions) {
   if (prep.problem.types.length === 0) throw new InputError('stock', 'stock: no stock bars are available (every quantity is 0)');
   const t0 = clock();
   const limit = Math.max(0, opts.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS);
-  const gen = solveCore(prep.problem, { deadline: t0 + limit, now: clock, mip: opts.mip ?? registeredMip });
-  return { prep, gen, t0: now() };
+  const mip = opts.mip ?? registeredMip;
+  const gen = solveCore(prep.problem, { deadline: t0 + limit, now: clock, mip });
+  return { prep, gen, t0: now(), mip: mip !== undefined };
 }
 
-function finish(prep: ReturnType<typeof prepareJob>, res: CoreResult, t0: number): CutPlan {
-  return buildPlan(prep, res, now() - t0);
+function finish(prep: ReturnType<typeof prepareJob>, res: CoreResult, t0: number, mip: boolean): CutPlan {
+  return buildPlan(prep, res, now() - t0, mip);
 }
 
 export function planCutsSync(job: CutJob, opts: Omit<PlanOptions, 'signal'> = {}): CutPlan {
-  const { prep, gen, t0 } = start(job, opts);
+  const { prep, gen, t0, mip } = start(job, opts);
   for (;;) {
     const r = gen.next();
-    if (r.done) return finish(prep, r.value, t0);
+    if (r.done) return finish(prep, r.value, t0, mip);
     opts.onProgress?.({ ...r.value, elapsedMs: now() - t0 });
   }
 }
 
 export async function planCuts(job: CutJob, opts: PlanOptions = {}): Promise<CutPlan> {
   opts.signal?.throwIfAborted();
-  const { prep, gen, t0 } = start(job, opts);
+  const { prep, gen, t0, mip } = start(job, opts);
   let sliceStart = now();
   let lastProgress = -Infinity;
   for (;;) {
     const r = gen.next();
-    if (r.done) return finish(prep, r.value, t0);
+    if (r.done) return finish(prep, r.value, t0, mip);
     const t = now();
     if (opts.onProgress && (t - lastProgress >= PROGRESS_EVERY_MS || r.value.phase !== 'improve')) {
       lastProgress = t;

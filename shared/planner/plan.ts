@@ -41,12 +41,13 @@ export interface CutPlan {
   trim: number;
   minOffcut: number;
   /** lpBound: the LP relaxation's optimum when the root LP finished, else null (`lowerBound` is the certified bound). */
-  stats: { elapsedMs: number; greedyBars: number; lpBound: number | null; nodes: number };
+  /** mip: the exact model's MIP solver (HiGHS) was at hand for this plan. */
+  stats: { elapsedMs: number; greedyBars: number; lpBound: number | null; nodes: number; mip: boolean };
 }
 
 const round3 = (v: number): number => Math.round(v * 1000) / 1000;
 
-export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number): CutPlan {
+export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number, mip = false): CutPlan {
   const { job, problem } = prep;
   // Each core item's part lines, drawn from one piece at a time as bars take them.
   const queues = prep.pieces.map((list) => list.map((x) => ({ ...x })));
@@ -110,6 +111,6 @@ export function buildPlan(prep: PreparedJob, res: CoreResult, elapsedMs: number)
     kerf: job.kerf,
     trim: job.trim,
     minOffcut: job.minOffcut,
-    stats: { elapsedMs: Math.round(elapsedMs), greedyBars: res.stats.greedyBars, lpBound: res.lpBound, nodes: res.stats.nodes },
+    stats: { elapsedMs: Math.round(elapsedMs), greedyBars: res.stats.greedyBars, lpBound: res.lpBound, nodes: res.stats.nodes, mip },
   };
 }

@@ -37,17 +37,18 @@ export function cutListCsv(cutList: ShopCutList, units: ShopUnits): string {
   return toCsv(rows);
 }
 
-/** The order list: stock bars (and shelf offcuts used), then the cut-to-length alternative. */
-export function orderListCsv(order: OrderList): string {
+/** The order list: stock bars (and shelf offcuts used), then the cut-to-length alternative. Lengths in mm for
+ * sorting and sums, and as the shop reads them. */
+export function orderListCsv(order: OrderList, units: ShopUnits): string {
   const c = order.currency;
-  const rows: CsvCell[][] = [['Buy as', 'Profile', 'Length (mm)', 'Quantity', `Unit price (${c})`, `Cost (${c})`, 'Part marks']];
+  const rows: CsvCell[][] = [['Buy as', 'Profile', 'Length (mm)', 'Length', 'Quantity', `Unit price (${c})`, `Cost (${c})`, 'Part marks']];
   for (const p of order.profiles) {
-    for (const l of p.order.stock.lines) rows.push([l.onHand ? 'offcut on hand' : 'stock bar', p.profileName, l.stockLength, l.qty, l.unitPrice, l.cost, '']);
+    for (const l of p.order.stock.lines) rows.push([l.onHand ? 'offcut on hand' : 'stock bar', p.profileName, l.stockLength, lengthText(l.stockLength, units), l.qty, l.unitPrice, l.cost, '']);
   }
   for (const p of order.profiles) {
-    for (const l of p.order.cutToLength.lines) rows.push(['cut to length', p.profileName, l.length, l.qty, null, l.cost, l.labels.join(' ')]);
+    for (const l of p.order.cutToLength.lines) rows.push(['cut to length', p.profileName, l.length, lengthText(l.length, units), l.qty, null, l.cost, l.labels.join(' ')]);
   }
-  rows.push(['total stock bars', '', null, order.barsToBuy, null, order.stockTotal, '']);
-  rows.push(['total cut to length', '', null, order.cutCount, null, order.cutToLengthTotal, '']);
+  rows.push(['total stock bars', '', null, '', order.barsToBuy, null, order.stockTotal, '']);
+  rows.push(['total cut to length', '', null, '', order.cutCount, null, order.cutToLengthTotal, '']);
   return toCsv(rows);
 }

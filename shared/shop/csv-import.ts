@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { InputError } from '../errors';
-import { parseLength } from '../geometry/units';
+import { parseLength, type LengthOptions } from '../geometry/units';
 
 export type CsvRowError = { line: number; reason: string };
 export type CsvImport<T> = { rows: { line: number; value: T }[]; errors: CsvRowError[] };
@@ -88,9 +88,9 @@ export function requiredText(rec: Record<string, string>, key: string, max = 120
   return v;
 }
 
-/** A length: bare numbers are millimetres; units and shop notation accepted ("6 m", "47 1/4 in"). */
-export function lengthCell(rec: Record<string, string>, key: string): number {
-  const mm = parseLength(requiredText(rec, key, 200), key);
+/** A length: bare numbers in `opts.bare` (millimetres unless told); units and shop notation accepted ("6 m", "47 1/4 in"). */
+export function lengthCell(rec: Record<string, string>, key: string, opts: LengthOptions = {}): number {
+  const mm = parseLength(requiredText(rec, key, 200), key, opts);
   if (!(mm > 0)) throw new InputError(key, `${key}: must be more than 0`);
   return Math.round(mm * 1000) / 1000;
 }

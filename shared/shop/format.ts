@@ -1,8 +1,7 @@
-import { formatLength } from '../geometry/units';
+import { lengthText } from '../display/format';
 import type { ShopOp, ShopUnits } from './types';
 
-/** A length as the builder reads it off the tape: "749.3 mm" or `29 1/2"`. */
-export const lengthText = (mm: number, units: ShopUnits): string => formatLength(mm, units.display, units.frac);
+export { dateText, lengthText, massText } from '../display/format';
 
 /** Whole millimetres for drilling positions when the builder works in mm; a tape reading otherwise. */
 export const positionText = (mm: number, units: ShopUnits): string => lengthText(mm, units);

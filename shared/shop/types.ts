@@ -1,11 +1,12 @@
+import type { Readout } from '../display/format';
 import type { OrderList as PlannerOrderList } from '../planner/order-list';
 
 // What the shop documents are made from. These are plain data shapes the server and the client fill from the
 // engine's report (shared/engine) and the stock planner's plan (shared/planner) — see from-report.ts — so every
 // document and CSV below is a pure function of them and can be tested without a drawing.
 
-/** Display units the builder chose: millimetres, or inches to the nearest 1/16 or 1/32. */
-export type ShopUnits = { display: 'mm' | 'in'; frac: 16 | 32 };
+/** Display units the builder chose: millimetres or inches to the nearest 1/16 or 1/32, kg or lb, the date format. */
+export type ShopUnits = Readout;
 
 /** Machining on one piece after the saw. `at_mm` is from the piece's start face. */
 export type ShopOp =

@@ -2,12 +2,17 @@ import { z } from 'zod';
 import {
   frameSchema,
   frameSummarySchema,
+  revisionComparisonSchema,
   revisionSchema,
   revisionSummarySchema,
   saveFrameDocumentResponseSchema,
   type CreateFrameRequest,
   type Frame,
   type FrameSummary,
+  type KeepRevisionRequest,
+  type NameRevisionRequest,
+  type RestoreRevisionRequest,
+  type RevisionComparison,
   type RenameFrameRequest,
   type Revision,
   type RevisionSummary,
@@ -40,5 +45,14 @@ export function createFramesApi(http: Http) {
     revisions: (frameId: string): Promise<RevisionSummary[]> => http.get(`${framePath(frameId)}/revisions`, revisionListSchema),
     revision: (frameId: string, version: number): Promise<Revision> =>
       http.get(`${framePath(frameId)}/revisions/${version}`, revisionSchema),
+    /** "Save revision": the current version stays in the history when the next save replaces it. */
+    keepRevision: (frameId: string, body: KeepRevisionRequest): Promise<RevisionSummary> =>
+      http.post(`${framePath(frameId)}/revisions`, body, revisionSummarySchema),
+    nameRevision: (frameId: string, version: number, body: NameRevisionRequest): Promise<RevisionSummary> =>
+      http.patch(`${framePath(frameId)}/revisions/${version}`, body, revisionSummarySchema),
+    compareRevisions: (frameId: string, from: number, to: number): Promise<RevisionComparison> =>
+      http.get(`${framePath(frameId)}/revisions/compare`, revisionComparisonSchema, { from: String(from), to: String(to) }),
+    restoreRevision: (frameId: string, version: number, body: RestoreRevisionRequest): Promise<SaveFrameDocumentResponse> =>
+      http.post(`${framePath(frameId)}/revisions/${version}/restore`, body, saveFrameDocumentResponseSchema),
   };
 }

@@ -1,6 +1,9 @@
+import { getActivePinia } from 'pinia';
+import { dateText, dateTimeText } from '@shared/display/format';
+import type { DateFormat } from '@shared/model/settings';
+import { usePreferencesStore } from '@/stores/preferences';
+
 const relative = new Intl.RelativeTimeFormat(undefined, { numeric: 'auto' });
-const absolute = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-const dateOnly = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 const STEPS: ReadonlyArray<[Intl.RelativeTimeFormatUnit, number]> = [
   ['second', 60],
@@ -9,8 +12,13 @@ const STEPS: ReadonlyArray<[Intl.RelativeTimeFormatUnit, number]> = [
   ['day', 7],
 ];
 
-/** "3 minutes ago", "yesterday"; after a week the date itself. */
-export function formatWhen(iso: string, now: Date = new Date()): string {
+/** The date format on screen: the open frame's or the workshop's, ISO 8601 before either is known. */
+function shownFormat(): DateFormat {
+  return getActivePinia() ? usePreferencesStore().date : 'iso';
+}
+
+/** "3 minutes ago", "yesterday"; after a week the date itself, in the chosen format. */
+export function formatWhen(iso: string, now: Date = new Date(), date: DateFormat = shownFormat()): string {
   const then = new Date(iso);
   if (Number.isNaN(then.getTime())) return '';
   let amount = (then.getTime() - now.getTime()) / 1000;
@@ -19,11 +27,10 @@ export function formatWhen(iso: string, now: Date = new Date()): string {
     if (Math.abs(amount) < size) return relative.format(Math.round(amount), unit);
     amount /= size;
   }
-  return dateOnly.format(then);
+  return dateText(then, { date });
 }
 
-/** Full date and time, for tooltips and titles. */
-export function formatExact(iso: string): string {
-  const then = new Date(iso);
-  return Number.isNaN(then.getTime()) ? '' : absolute.format(then);
+/** Full date and 24-hour time in the chosen format, for tooltips, titles and lists. */
+export function formatExact(iso: string, date: DateFormat = shownFormat()): string {
+  return dateTimeText(iso, { date });
 }

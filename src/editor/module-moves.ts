@@ -1,4 +1,5 @@
-import { placeOfModule, trySwapModules } from '@shared/editing/bays';
+import { placeOfModule } from '@shared/editing/bays';
+import { trySwapModules } from '@shared/editing/swap';
 import { moveModules } from '@shared/editing/edits';
 import type { Scene } from '@shared/editing/scene';
 import type { FrameDocument } from '@shared/model/frame-document';

@@ -1,16 +1,19 @@
 import { computed } from 'vue';
 import { storeToRefs } from 'pinia';
-import { formatLength } from '@shared/geometry/units';
+import { lengthText, massText } from '@shared/display/format';
 import { usePreferencesStore } from '@/stores/preferences';
 
-/** Lengths as the builder chose to read them (mm, or inches to 1/16 or 1/32), everywhere in the editor. */
+/** Lengths and masses as the frame (or its workshop) reads them: mm or inches to 1/16 or 1/32, kg or lb. */
 export function useLengthFormat() {
   const prefs = usePreferencesStore();
-  const { units, fraction } = storeToRefs(prefs);
+  const { units, fraction, decimalComma } = storeToRefs(prefs);
   const fmt = computed(() => {
-    const u = units.value;
-    const f = fraction.value;
-    return (mm: number) => formatLength(mm, u, f);
+    const r = prefs.active;
+    return (mm: number) => lengthText(mm, r);
   });
-  return { fmt, unit: units, fraction };
+  const fmtMass = computed(() => {
+    const r = prefs.active;
+    return (kg: number) => massText(kg, r);
+  });
+  return { fmt, fmtMass, unit: units, fraction, decimalComma };
 }

@@ -14,6 +14,7 @@ export interface RouteNamedMap {
   workshops: RouteRecordInfo<'workshops', '/workshops', NoParams, NoParams>;
   projects: RouteRecordInfo<'projects', '/w/:workshopId', WorkshopParams, WorkshopParams>;
   members: RouteRecordInfo<'members', '/w/:workshopId/members', WorkshopParams, WorkshopParams>;
+  'workshop-settings': RouteRecordInfo<'workshop-settings', '/w/:workshopId/settings', WorkshopParams, WorkshopParams>;
   project: RouteRecordInfo<'project', '/w/:workshopId/projects/:projectId', ProjectParams, ProjectParams>;
   frame: RouteRecordInfo<'frame', '/w/:workshopId/projects/:projectId/frames/:frameId', FrameParams, FrameParams>;
   cutting: RouteRecordInfo<'cutting', '/w/:workshopId/projects/:projectId/frames/:frameId/cutting', FrameParams, FrameParams>;
@@ -66,6 +67,12 @@ export const routes: RouteRecordRaw[] = [
     name: 'members',
     component: () => import('@/views/MembersView.vue'),
     meta: { requires: 'members.manage', title: 'Members' },
+  },
+  {
+    path: '/w/:workshopId/settings',
+    name: 'workshop-settings',
+    component: () => import('@/views/WorkshopSettingsView.vue'),
+    meta: { requires: 'read', title: 'Workshop settings' },
   },
   {
     path: '/w/:workshopId/projects/:projectId',

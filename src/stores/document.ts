@@ -17,6 +17,16 @@ import { dropDraft, keepDraft, loadDraft } from './conflict-drafts';
 import { useDocumentSaving } from './document-saving';
 import { useNoticesStore } from './notices';
 
+/** Runs `f` when the page is idle (or after 100 ms at the latest); returns a cancel. */
+function whenIdle(f: () => void): () => void {
+  if (typeof requestIdleCallback === 'function') {
+    const id = requestIdleCallback(f, { timeout: 100 });
+    return () => cancelIdleCallback(id);
+  }
+  const id = setTimeout(f, 0);
+  return () => clearTimeout(id);
+}
+
 export type Selection = { members: readonly string[]; modules: readonly string[] };
 const NOTHING: Selection = { members: [], modules: [] };
 
@@ -64,6 +74,8 @@ export const useDocumentStore = defineStore('document', () => {
   let summaryLabel: { revision: number; label: string } | null = null;
   /** Bumped on every applied change, so views can watch one number. */
   const revision = ref(0);
+  /** The version the frame was opened (or last kept) at: saves since then make leaving keep a revision. */
+  let savedAtOpen = 0;
 
   const history = createHistory();
   const historyTick = ref(0);
@@ -82,18 +94,36 @@ export const useDocumentStore = defineStore('document', () => {
     },
   });
 
+  // The scene an answer brings (marks, load colours) is drawn at once; its report, which on a large frame takes a
+  // while to read, is taken when the page next has a moment, so the drawing is painted first.
+  let arriving: { answer: ReportAnswer; cancel: () => void } | null = null;
   function onReport(a: ReportAnswer): void {
-    report.value = a.report;
     scene.value = a.scene;
     goods.value = a.goods;
+    keepSelectionValid(a.scene);
+    arriving?.cancel();
+    arriving = { answer: a, cancel: whenIdle(takeReport) };
+  }
+  function takeReport(): void {
+    const a = arriving?.answer;
+    arriving = null;
+    if (!a) return;
+    report.value = a.report;
     engineMs.value = a.ms;
     engineError.value = null;
-    checking.value = false;
+    // An edit made while this report waited to be read has its own on the way.
+    checking.value = reports.busy();
     if (summaryLabel?.revision === a.revision && a.changes) summary.value = { label: summaryLabel.label, changes: a.changes };
     summaryLabel = null;
-    keepSelectionValid(a.scene);
+  }
+  function dropArriving(): void {
+    arriving?.cancel();
+    arriving = null;
   }
   function onEngineError(f: ReportFailure): void {
+    // A report still to be taken is on an earlier document: it is the last one that could be checked.
+    arriving?.cancel();
+    takeReport();
     engineError.value = { message: f.message, field: f.field };
     checking.value = false;
     summaryLabel = null;
@@ -125,6 +155,7 @@ export const useDocumentStore = defineStore('document', () => {
     goods.value = null;
     engineError.value = null;
     summaryLabel = null;
+    dropArriving();
     readOnly.value = !canWrite;
     try {
       const parsed = parseFrameDocument(frame.document);
@@ -138,6 +169,7 @@ export const useDocumentStore = defineStore('document', () => {
       readOnly.value = true;
     }
     saving.reset(frame.version, doc.value);
+    savedAtOpen = frame.version;
     // A draft that lost a save race before the page was left: bring it back with the choice still open.
     const draft = canWrite && doc.value ? loadDraft(frame.id) : null;
     if (draft) {
@@ -155,13 +187,40 @@ export const useDocumentStore = defineStore('document', () => {
     else reports.cancel();
   }
 
+  /**
+   * "Save revision": whatever waits is saved, then the version saved is kept as a revision of its own (named, if
+   * given). Resolves to false when there is nothing saved to keep (a conflict open, no frame).
+   */
+  async function keepRevision(name?: string | null): Promise<boolean> {
+    const id = frameId.value;
+    if (!id || readOnly.value) return false;
+    await saving.flush();
+    if (saving.conflict || frameId.value !== id) return false;
+    await api.frames.keepRevision(id, { baseVersion: saving.baseVersion, name });
+    savedAtOpen = saving.baseVersion;
+    return true;
+  }
+
   function close(): void {
-    void saving.flush();
+    const id = frameId.value;
+    const edited = id !== null && !readOnly.value && (saving.dirty || saving.baseVersion !== savedAtOpen);
+    const flushed = saving.flush();
+    // Leaving the editor ends the editing stretch: what was saved in this visit stays as a revision.
+    if (edited && id) {
+      void flushed.then(() => {
+        if (frameId.value !== null || saving.conflict) return;
+        return api.frames.keepRevision(id, { baseVersion: saving.baseVersion }).then(
+          () => undefined,
+          () => undefined,
+        );
+      });
+    }
     frameId.value = null;
     doc.value = null;
     report.value = null;
     goods.value = null;
     reports.cancel();
+    dropArriving();
     checking.value = false;
     engineError.value = null;
     scene.value = emptyScene();
@@ -283,11 +342,16 @@ export const useDocumentStore = defineStore('document', () => {
     saving.markSaved(doc.value);
   }
 
-  /** Keep ours: save it on top of theirs (theirs stays in the saved versions). */
+  /**
+   * Keep ours: save it on top of theirs. Theirs is kept as a revision first, even when it was saved under the same
+   * account (another tab or device) within the same editing stretch, so it stays in the saved versions.
+   */
   function keepMine(current: VersionConflictCurrent): void {
-    if (frameId.value) dropDraft(frameId.value);
+    const id = frameId.value;
+    if (id) dropDraft(id);
     saving.adoptVersion(current.version, null);
-    saving.schedule(0);
+    const kept = id ? api.frames.keepRevision(id, { baseVersion: current.version }).catch(() => undefined) : Promise.resolve();
+    void kept.then(() => saving.schedule(0));
   }
 
   function dismissSummary(): void {
@@ -323,6 +387,7 @@ export const useDocumentStore = defineStore('document', () => {
     saving,
     open,
     close,
+    keepRevision,
     apply,
     edit,
     undo,

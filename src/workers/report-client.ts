@@ -1,5 +1,6 @@
 // The editor's side of the report worker: one request in flight at a time, the newest document waiting behind it
 // (documents in between are never worked out), and answers for anything but the newest document dropped.
+import type { FrameReport } from '@shared/engine/report';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { createReportEngine, type ReportReply, type ReportRequest } from './report-engine';
 
@@ -11,7 +12,9 @@ export interface ReportPort {
   terminate(): void;
 }
 
-export type ReportAnswer = Extract<ReportReply, { type: 'report' }>;
+type ReportWire = Extract<ReportReply, { type: 'report' }>;
+/** A report as delivered: `report` is read from its JSON text the first time it is asked for. */
+export type ReportAnswer = Omit<ReportWire, 'reportJson'> & { readonly report: FrameReport };
 export type ReportFailure = Extract<ReportReply, { type: 'error' }>;
 
 export type ReportClient = {
@@ -55,7 +58,7 @@ export function createReportClient(opts: {
     const current = reply.revision === latest;
     next();
     if (!current) return;
-    if (reply.type === 'report') opts.onReport(reply);
+    if (reply.type === 'report') opts.onReport(answerOf(reply));
     else opts.onError(reply);
   }
 
@@ -88,6 +91,17 @@ export function createReportClient(opts: {
       port = null;
       inFlight = null;
       waiting = null;
+    },
+  };
+}
+
+function answerOf(wire: ReportWire): ReportAnswer {
+  const { reportJson, ...rest } = wire;
+  let report: FrameReport | null = null;
+  return {
+    ...rest,
+    get report() {
+      return (report ??= JSON.parse(reportJson) as FrameReport);
     },
   };
 }

@@ -13,17 +13,26 @@ export type ReportRequest = {
   /** Increases with every document the editor applies; answers carry it back so stale ones can be told apart. */
   revision: number;
   doc: FrameDocument;
-  /** A frame was opened: forget the last report (its part marks belong to another frame). */
+  /** A frame was opened: forget the last report (it belongs to another frame). */
   reset: boolean;
   /** Also say which parts the change kept, re-cut or added (a re-lay's summary). */
   summarise: boolean;
 };
 
+/**
+ * The report travels as JSON text: copying one string to the editor's thread is quick, where rebuilding the
+ * object graph of a large frame's report (megabytes) there took most of an edit's budget; the editor reads it
+ * when it has a moment (see report-client.ts). The scene, which the drawing needs at once, travels as it is.
+ */
 export type ReportReply =
-  | { type: 'report'; revision: number; report: FrameReport; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
+  | { type: 'report'; revision: number; reportJson: string; scene: Scene; goods: SheetGoods | null; ms: number; changes: WhatChanged | null }
   | { type: 'error'; revision: number; message: string; field: string | null };
 
-/** One engine per frame editor: part marks carry over from each report to the next, as the parts stay the same. */
+/**
+ * One engine per frame editor. Part marks come from the document alone (its pinned marks, then first appearance),
+ * exactly as the server's saw list and cutting view work them out, so the editor never shows a mark the shop's
+ * papers do not; the last report is kept only to say what a change did.
+ */
 export function createReportEngine(now: () => number = () => performance.now()): (req: ReportRequest) => ReportReply {
   let last: FrameReport | null = null;
   return (req) => {
@@ -31,11 +40,11 @@ export function createReportEngine(now: () => number = () => performance.now()):
     const t0 = now();
     try {
       // With the drawers', panels' and countertop's mass and hardware, as the shop documents have them.
-      const { report, goods } = reportWithSheetGoods(req.doc, last ? { previous: last } : {});
+      const { report, goods } = reportWithSheetGoods(req.doc);
       const scene = sceneFromReport(req.doc, report, goods);
       const changes = req.summarise && last ? diffReports(last, report) : null;
       last = report;
-      return { type: 'report', revision: req.revision, report, scene, goods, ms: now() - t0, changes };
+      return { type: 'report', revision: req.revision, reportJson: JSON.stringify(report), scene, goods, ms: now() - t0, changes };
     } catch (e) {
       return { type: 'error', revision: req.revision, message: e instanceof Error ? e.message : String(e), field: e instanceof InputError ? e.field : null };
     }

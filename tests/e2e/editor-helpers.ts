@@ -118,3 +118,43 @@ export async function pickMember(page: Page, id: string): Promise<void> {
 export async function fieldValue(page: Page, testid: string): Promise<string> {
   return page.getByTestId(testid).locator('input').inputValue();
 }
+
+/** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
+export async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
+  await page.getByRole('tab', { name: /^Loads/ }).click();
+  const list = page.getByRole('list', { name: 'What each module bears on' });
+  await list.waitFor();
+  const out = new Map<string, string[]>();
+  for (const item of await list.locator(':scope > li').all()) {
+    const name = (await item.getByTestId('bearing-module').innerText()).trim();
+    out.set(name, (await item.locator('li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim()));
+  }
+  return out;
+}
+
+/**
+ * Draws a rail by hand in the front view across the opening between two uprights, at height `z`: it starts and
+ * ends a little inside the opening, so its ends snap to the uprights' faces. Leaves the Pick tool on.
+ */
+export async function drawRailBetween(page: Page, report: FrameReport, leftId: string, rightId: string, z: number): Promise<void> {
+  const left = itemInView(report, 'front', leftId);
+  const right = itemInView(report, 'front', rightId);
+  await page.getByRole('button', { name: 'Draw', exact: true }).click();
+  const a = await toScreen(page, 'front', left.x1 + 4, z);
+  const b = await toScreen(page, 'front', right.x0 - 4, z);
+  await page.mouse.move(a.x, a.y);
+  await page.mouse.down();
+  for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
+  await page.mouse.up();
+  await page.getByRole('button', { name: 'Pick', exact: true }).click();
+}
+
+/** Swaps two modules as a builder does: pick one in the Modules list, Shift-click the other, press S. */
+export async function swapModules(page: Page, first: RegExp, second: RegExp): Promise<void> {
+  await page.getByRole('tab', { name: 'Modules' }).click();
+  const modules = page.getByRole('list', { name: 'Modules in this frame' });
+  await modules.getByRole('button', { name: first }).click();
+  await modules.getByRole('button', { name: second }).click({ modifiers: ['Shift'] });
+  await page.locator('[data-view="front"]').focus();
+  await page.keyboard.press('s');
+}

@@ -9,11 +9,11 @@ import { fieldValue, toScreen, useScratchFrame } from './editor-helpers';
 
 const P = '40x40-s8';
 const upright = (id: string, x: number, y: number) => ({ type: 'member', id, profile: P, axis: 'z', start: { offset_mm: 0 }, end: { offset_mm: 800 }, place: { x: { offset_mm: x }, y: { offset_mm: y } } });
-const rail = (id: string, y: number) => ({ type: 'member', id, profile: P, axis: 'x', start: { offset_mm: 40 }, end: { offset_mm: 560 }, place: { y: { offset_mm: y }, z: { offset_mm: 300 } } });
+const rail = (id: string, name: string, y: number) => ({ type: 'member', id, name, profile: P, axis: 'x', start: { offset_mm: 40 }, end: { offset_mm: 560 }, place: { y: { offset_mm: y }, z: { offset_mm: 300 } } });
 const doc = frameDocumentSchema.parse({
   schemaVersion: CURRENT_SCHEMA_VERSION,
   name: 'Hand-drawn shelf',
-  members: [upright('post-fl', 0, 0), upright('post-fr', 560, 0), upright('post-bl', 0, 360), upright('post-br', 560, 360), rail('rail-front', 0), rail('rail-back', 360)],
+  members: [upright('post-fl', 0, 0), upright('post-fr', 560, 0), upright('post-bl', 0, 360), upright('post-br', 560, 360), rail('rail-front', 'Front rail', 0), rail('rail-back', 'Back rail', 360)],
 });
 // The rails' top faces: 300 mm up plus the profile's 40 mm.
 const RAIL_TOP = 340;
@@ -46,14 +46,16 @@ describe('a module seated on a hand-drawn frame', () => {
     // It bears on both rails; Loads lists them under the tank with their utilisation.
     const carried = await page.getByTestId('module-carried-by').innerText();
     expect(carried).toMatch(/^Sits on: /);
-    expect(carried).toContain('rail-front');
-    expect(carried).toContain('rail-back');
+    // By mark and the name the builder gave them, never the record's id.
+    expect(carried).toMatch(/[A-Z]+ Front rail \(\d+ %\)/);
+    expect(carried).toMatch(/[A-Z]+ Back rail \(\d+ %\)/);
+    expect(carried).not.toMatch(/rail-front|rail-back/);
     await page.getByRole('tab', { name: /^Loads/ }).click();
     const list = page.getByRole('list', { name: 'What each module bears on' });
     const lines = (await list.locator('li li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim());
-    // Named as the builder knows them: kind and part mark (the two are the same part, so where each one is), never the id.
-    expect(lines.some((l) => /^rail [A-Z]+ \(at y 20 mm, z 320 mm\) \d+ %$/.test(l))).toBe(true);
-    expect(lines.some((l) => /^rail [A-Z]+ \(at y 380 mm, z 320 mm\) \d+ %$/.test(l))).toBe(true);
+    // Named as the builder knows them: kind, part mark and the name given, never the record id.
+    expect(lines.some((l) => /^rail [A-Z]+ \(Front rail\) \d+ %$/.test(l))).toBe(true);
+    expect(lines.some((l) => /^rail [A-Z]+ \(Back rail\) \d+ %$/.test(l))).toBe(true);
     expect(lines.join(' ')).not.toMatch(/rail-front|rail-back/);
     const pct = lines.map((l) => Number(/(\d+) %$/.exec(l)?.[1] ?? 0));
     expect(Math.max(...pct)).toBeGreaterThan(0);

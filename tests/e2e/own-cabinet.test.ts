@@ -6,25 +6,12 @@ import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
-import { cutListRows, fieldValue, itemInView, pickMember, toScreen } from './editor-helpers';
+import { bearingByModule, cutListRows, drawRailBetween, fieldValue, itemInView, pickMember, swapModules } from './editor-helpers';
 
 // A builder with a brand-new account (signed up here, no demo data) lays out their own cabinet, reads its loads,
 // swaps two modules, undoes, and adds and removes a bay: the demo's story on a frame nobody scripted.
 
 const stamp = Date.now().toString(36);
-
-/** The Loads tab's list of modules, each with the members it bears on: { module name → member lines }. */
-async function bearingByModule(page: Page): Promise<Map<string, string[]>> {
-  await page.getByRole('tab', { name: /^Loads/ }).click();
-  const list = page.getByRole('list', { name: 'What each module bears on' });
-  await list.waitFor();
-  const out = new Map<string, string[]>();
-  for (const item of await list.locator(':scope > li').all()) {
-    const name = (await item.getByTestId('bearing-module').innerText()).trim();
-    out.set(name, (await item.locator('li').allInnerTexts()).map((t) => t.replace(/\s+/g, ' ').trim()));
-  }
-  return out;
-}
 
 describe('a builder lays out and re-lays their own cabinet from an empty account', () => {
   let page: Page;
@@ -63,15 +50,7 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
 
     // A shelf rail drawn by hand across the sink's bay, its ends snapped to the uprights' faces: it re-lays with them.
     const left = itemInView(report, 'front', 'run-u1-f');
-    const right = itemInView(report, 'front', 'run-u2-f');
-    await page.getByRole('button', { name: 'Draw', exact: true }).click();
-    const a = await toScreen(page, 'front', left.x1 + 4, 420);
-    const b = await toScreen(page, 'front', right.x0 - 4, 420);
-    await page.mouse.move(a.x, a.y);
-    await page.mouse.down();
-    for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
-    await page.mouse.up();
-    await page.getByRole('button', { name: 'Pick', exact: true }).click();
+    await drawRailBetween(page, report, 'run-u1-f', 'run-u2-f', 420);
 
     // The upright between the cooler's and the sink's bays, before the swap.
     await pickMember(page, 'run-u1-f');
@@ -79,12 +58,7 @@ describe('a builder lays out and re-lays their own cabinet from an empty account
     const cutBefore = await cutListRows(page);
 
     // Swap the cooler and the sink: pick one, Shift-click the other in the list, press S.
-    await page.getByRole('tab', { name: 'Modules' }).click();
-    const modules = page.getByRole('list', { name: 'Modules in this frame' });
-    await modules.getByRole('button', { name: /Compressor cooler/ }).click();
-    await modules.getByRole('button', { name: /Sink with tap/ }).click({ modifiers: ['Shift'] });
-    await page.locator('[data-view="front"]').focus();
-    await page.keyboard.press('s');
+    await swapModules(page, /Compressor cooler/, /Sink with tap/);
     const changed = page.getByTestId('what-changed');
     await changed.waitFor();
     expect(await changed.innerText()).toMatch(/Swap “?Compressor cooler”? and “?Sink with tap”?/);

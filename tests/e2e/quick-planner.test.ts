@@ -29,6 +29,6 @@ describe('the quick planner page', () => {
   it('names the line of a bad list', async () => {
     await page.locator('[data-test=parts] textarea').fill('1200,4,A\nabc,1,B');
     await page.locator('[data-test=plan]').click();
-    expect(await page.locator('[data-test=input-error]').innerText()).toContain('line 2: length "abc" is not a number');
+    expect(await page.locator('[data-test=input-error]').innerText()).toContain('line 2: length: "abc"');
   });
 });

@@ -57,7 +57,24 @@ describe('ordering from a supplier', () => {
     expect(await detail.innerText()).toContain('Stock bars to buy');
     await page.screenshot({ path: screenshotPath('shop-order-draft.png'), fullPage: true });
 
+    // Send shows the e-mail and the supplier's PDF first; cancelling sends nothing.
     await detail.getByRole('button', { name: 'Send to supplier' }).click();
+    const preview = page.getByTestId('send-preview');
+    await preview.getByTestId('send-preview-text').waitFor({ timeout: 30_000 });
+    expect(await preview.getByTestId('send-preview-to').innerText()).toBe('orders@northgate.test');
+    const previewText = await preview.getByTestId('send-preview-text').innerText();
+    expect(previewText).toContain('Stock bars to buy');
+    expect(previewText).not.toMatch(/comparison/i);
+    const pdfUrl = await preview.getByRole('link', { name: /^order-.*\.pdf$/ }).getAttribute('href');
+    const pdfType = await page.evaluate(async (u) => (await fetch(u!, { credentials: 'same-origin' })).headers.get('content-type'), pdfUrl);
+    expect(pdfType).toBe('application/pdf');
+    await page.screenshot({ path: screenshotPath('shop-send-preview.png'), fullPage: true });
+    await preview.getByRole('button', { name: 'Cancel' }).click();
+    await preview.waitFor({ state: 'hidden' });
+    await detail.getByText('Draft', { exact: true }).waitFor();
+    await detail.getByRole('button', { name: 'Send to supplier' }).click();
+    await preview.getByTestId('send-preview-text').waitFor({ timeout: 30_000 });
+    await preview.getByRole('button', { name: 'Send', exact: true }).click();
     await detail.getByText(/Sent .* to orders@northgate\.test/).waitFor({ timeout: 30_000 });
     expect(await detail.getByRole('button', { name: 'Send to supplier' }).count()).toBe(0);
     const reference = (await detail.getByRole('heading').first().innerText()).replace('Order ', '');
@@ -68,6 +85,8 @@ describe('ordering from a supplier', () => {
     const mail = page.getByTestId('outbox-mail');
     await mail.waitFor();
     expect(await mail.innerText()).toContain('Stock bars to buy');
+    // What went out is what the preview showed.
+    expect((await mail.innerText()).replace(/\s+/g, ' ')).toContain(previewText.trim().replace(/\s+/g, ' '));
     await mail.getByRole('link', { name: `order-${reference}.pdf` }).waitFor();
     await page.screenshot({ path: screenshotPath('shop-outbox.png'), fullPage: true });
   });

@@ -55,7 +55,7 @@ describe('calc swap', () => {
     const f = join(dir, 'galley2.json');
     writeFileSync(f, JSON.stringify(await cabinet([SPEC])));
     await expect(swap([f, 'cooler', 'fridge'])).rejects.toThrow(/MODULE_B: no module "fridge"/);
-    await expect(swap([f, 'drawer-mid', 'sink'])).rejects.toThrow(/cannot swap: “Cutlery drawer” and “Sink with tap” are stacked in the same bay/);
+    await expect(swap([f, 'cooler', 'cooler'])).rejects.toThrow(/cannot swap: Pick two different modules to swap; both picks are “Compressor cooler”/);
   });
 });
 

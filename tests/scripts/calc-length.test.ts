@@ -17,6 +17,15 @@ describe('calc length', () => {
     expect((await run(['429.5', '--frac', '32'])).text_in).toBe('16 29/32"');
   });
 
+  it('reads a bare number in the unit asked for, and a decimal comma when told', async () => {
+    // 29 1/2 in = 29.5 × 25.4 = 749.3 mm; 2 ft 3-1/2 in = 27.5 in = 698.5 mm.
+    expect((await run(['29 1/2', '--bare', 'in'])).mm).toBe(749.3);
+    expect((await run(['2 ft 3-1/2 in'])).mm).toBe(698.5);
+    expect((await run(['1,5 m', '--decimal-comma'])).mm).toBe(1500);
+    await expect(run(['1,5 m'])).rejects.toThrow(/comma/);
+    await expect(run(['12', '--bare', 'ft'])).rejects.toThrow(/--bare/);
+  });
+
   it('rejects a bad fraction, a missing expression and a non-length', async () => {
     await expect(run(['100', '--frac', '10'])).rejects.toThrow(/--frac/);
     await expect(run([])).rejects.toThrow(/length/);

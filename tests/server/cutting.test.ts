@@ -106,6 +106,35 @@ describe('cutting at the saw', () => {
     expect(restarted.body.session.frameVersion).toBe(2);
     expect(restarted.body.ticks).toEqual([]);
   });
+
+  it('the design-changed banner follows what is cut, not the version: a save that cuts nothing new, and an undo, leave it off', async () => {
+    const start = (await c('cutter').get(url())).body as CuttingState;
+    expect(start.session!.cuttingKey).toBe(start.currentCuttingKey);
+    const frame = (await c('designer').get(`/api/frames/${w.frameId}`)).body;
+    const saveAs = async (document: unknown, baseVersion: number) =>
+      (await c('designer').put(`/api/frames/${w.frameId}/document`, { baseVersion, document }).expect(200)).body.version as number;
+
+    // Renaming a member changes the version but no part.
+    const renamed = structuredClone(frame.document);
+    renamed.members[0].name = 'Front rail, renamed';
+    let v = await saveAs(renamed, frame.version);
+    let s = (await c('cutter').get(url())).body as CuttingState;
+    expect(s.currentVersion).toBe(frame.version + 1);
+    expect(s.currentCuttingKey).toBe(s.session!.cuttingKey);
+
+    // Taking a member out changes what is cut …
+    const fewer = structuredClone(frame.document);
+    fewer.members.pop();
+    v = await saveAs(fewer, v);
+    s = (await c('cutter').get(url())).body as CuttingState;
+    expect(s.currentCuttingKey).not.toBe(s.session!.cuttingKey);
+
+    // … and putting it back (an undo) gives the same parts again.
+    v = await saveAs(frame.document, v);
+    s = (await c('cutter').get(url())).body as CuttingState;
+    expect(s.currentVersion).toBe(v);
+    expect(s.currentCuttingKey).toBe(s.session!.cuttingKey);
+  });
 });
 
 describe('printed documents and CSV for a frame', () => {

@@ -1,6 +1,8 @@
 import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { OrderDetail, Supplier } from '@shared/api/shop';
+import type { OrderDetail, SendPreview, Supplier } from '@shared/api/shop';
+import { StockOffcut } from '../../server/modules/stock/stock-offcut.entity';
+import { Workshop } from '../../server/modules/workshops/workshop.entity';
 import { ACTORS, EDITORS, MEMBERS, refusal, useShopWorld, type Actor, type ShopWorld } from './shop-world';
 import { pdfText } from '../support/pdf-text';
 import { outboxAttachment } from '../../server/mail/outbox';
@@ -10,6 +12,12 @@ useShopWorld((world) => {
   w = world;
 });
 const c = (a: Actor) => w.clients.get(a)!;
+const binaryParser = (r: import('supertest').Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  const stream = r as unknown as NodeJS.ReadableStream;
+  stream.on('data', (d: Buffer) => chunks.push(d));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
+};
 
 const supplierBody = {
   name: 'Northgate Metals',
@@ -85,11 +93,7 @@ describe('orders', () => {
   });
 
   it('serves the order as PDF and CSV to members only', async () => {
-    const pdf = await c('viewer').get(`/api/orders/${order.id}/order.pdf`).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (d: Buffer) => chunks.push(d));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const pdf = await c('viewer').get(`/api/orders/${order.id}/order.pdf`).buffer(true).parse(binaryParser);
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     const { text } = await pdfText(pdf.body as Buffer);
@@ -152,13 +156,54 @@ describe('orders', () => {
     expect((await c('owner').delete(`/api/orders/${order.id}`)).status).toBe(409);
   });
 
+  it('shows the e-mail and the supplier’s PDF before sending, exactly as they go out, with nothing of the shop’s own', async () => {
+    // An offcut on the shelf: the shop's copy lists it, the supplier's does not (it is not bought).
+    const em = w.ctx.orm.em.fork();
+    const shelf = em.create(StockOffcut, { workshop: em.getReference(Workshop, w.workshopId), profile: '30x30-s8', lengthMm: 5900, qty: 1 });
+    await em.flush();
+    const draft = (await c('owner').post(`/api/workshops/${w.workshopId}/orders`, { frameId: w.frameId, supplierId, mode: 'stock' }).expect(201)).body as OrderDetail;
+    expect(draft.contents.text).toMatch(/For comparison/);
+    for (const a of ACTORS) {
+      const res = await c(a).get(`/api/orders/${draft.id}/send-preview`);
+      expect(res.status).toBe(EDITORS.includes(a) ? 200 : refusal(a));
+    }
+    const before = w.fake.received().length;
+    const preview = (await c('designer').get(`/api/orders/${draft.id}/send-preview`).expect(200)).body as SendPreview;
+    // Looking sends nothing.
+    expect(w.fake.received().length).toBe(before);
+    expect((await c('owner').get(`/api/orders/${draft.id}`)).body.status).toBe('draft');
+    expect(preview.to).toBe('orders@northgate.test');
+    expect(preview.text).not.toMatch(/comparison|cut to length|price per metre|on hand|offcut/i);
+
+    const copy = await c('designer').get(preview.attachment.url).buffer(true).parse(binaryParser);
+    expect(copy.status).toBe(200);
+    const supplierPdf = (await pdfText(copy.body as Buffer)).text;
+    const shopPdf = (await pdfText((await c('designer').get(`/api/orders/${draft.id}/order.pdf`).buffer(true).parse(binaryParser)).body as Buffer)).text;
+    // The facts block prints its labels in capitals: compared without case.
+    const internal = ['offcut on hand', 'cut to length total', 'cut to length by the supplier', 'per metre'];
+    for (const words of internal) expect(shopPdf.toLowerCase()).toContain(words);
+    for (const words of internal) expect(supplierPdf.toLowerCase()).not.toContain(words);
+    expect(supplierPdf).toContain(draft.reference);
+    expect((await c('designer').get(`/api/orders/${draft.id}/order.pdf?copy=everything`)).status).toBe(400);
+
+    const arrived = w.fake.next();
+    await c('designer').post(`/api/orders/${draft.id}/send`).expect(200);
+    const mail = await arrived;
+    expect([mail.envelopeTo, mail.subject, mail.text.trim()]).toEqual([[preview.to], preview.subject, preview.text.trim()]);
+    expect(mail.attachments.map((a) => a.filename)).toEqual([preview.attachment.filename]);
+    const sentPdf = await outboxAttachment(w.mailDir, w.workshopId, mail.id, 0);
+    expect((await pdfText(sentPdf!.content)).text).toBe(supplierPdf);
+    // The shelf as the later tests expect it.
+    await em.nativeDelete(StockOffcut, { id: shelf.id });
+  });
+
   it('lists orders for members with their status', async () => {
     for (const a of ACTORS) {
       const res = await c(a).get(`/api/workshops/${w.workshopId}/orders`);
       expect(res.status).toBe(MEMBERS.includes(a) ? 200 : refusal(a));
     }
     const list = (await c('viewer').get(`/api/workshops/${w.workshopId}/orders`)).body as { status: string }[];
-    expect(list.map((o) => o.status).sort()).toEqual(['received', 'sent']);
+    expect(list.map((o) => o.status).sort()).toEqual(['received', 'sent', 'sent']);
   });
 
   it('a mail server that is down leaves the order a draft with the reason, to send again later', async () => {
@@ -178,7 +223,8 @@ describe('outbox (owner only)', () => {
     expect(res.status).toBe(a === 'owner' ? 200 : refusal(a));
     if (a === 'owner') {
       expect(res.body.fake).toBe(true);
-      expect(res.body.messages.length).toBe(2);
+      // The order sent first, the one of the two racing sends that won, and the one sent after its preview.
+      expect(res.body.messages.length).toBe(3);
       const m = res.body.messages[0];
       const att = await c('owner').get(`/api/workshops/${w.workshopId}/outbox/${m.id}/attachments/0`);
       expect(att.status).toBe(200);

@@ -56,6 +56,18 @@ describe('other shop documents', () => {
     expect(text).not.toMatch(/\bD\b.*480 mm/);
   });
 
+  it('drill list and labels in inches for an inch shop, the date day first', async () => {
+    const inch = { ...meta, units: { display: 'in', frac: 16, date: 'dmy' } as const };
+    const { text } = await pdfText(await drillListPdf(drillSheet(cutList, inch.units), inch));
+    // 20 mm / 25.4 = 0.787 in → nearest 1/16 is 13/16 (0.8125); 1 in = 25.4 mm exactly (NIST SP 811)
+    expect(text).toMatch(/Access hole Ø8 mm in the front face, 13\/16" from the\s+start/);
+    expect(text).toContain('01/12/2026');
+    const labels = await pdfText(await labelsPdf(partLabels(cutList, inch), inch));
+    // 1120 mm = 44.094 in → 44 1/16 is 44.0625, 44 1/8 is 44.125: nearest is 44 1/8
+    expect(count(labels.text, /44 1\/8"/)).toBe(4);
+    expect(labels.text).not.toMatch(/\b1120 mm\b/);
+  });
+
   it('pick list shows counts and the slide-in warning', async () => {
     const { text } = await pdfText(await pickListPdf(pickSheet(cutList), meta));
     expect(text).toContain('T-NUTS TO SLIDE IN BEFORE CLOSING A SLOT');

@@ -60,13 +60,15 @@ beforeAll(async () => {
   ]);
   otherWorkshopId = other.id;
 
-  // The project: its frame saved twice (two revisions), cutting started with one cut ticked, and a photo.
+  // The project: its frame saved twice, each save ending its editing stretch (two revisions), cutting started with
+  // one cut ticked, and a photo.
   const designer = c('designer');
   const frame = (await designer.get(`/api/frames/${w.frameId}`).expect(200)).body as { version: number; document: ReturnType<typeof demoDocument> };
   const doc = structuredClone(frame.document) as { members: { name?: string }[] };
   for (const name of ['left upright', 'left upright, front']) {
     doc.members[0].name = name;
     const v = (await designer.get(`/api/frames/${w.frameId}`).expect(200)).body.version as number;
+    await designer.post(`/api/frames/${w.frameId}/revisions`, { baseVersion: v }).expect(200);
     await designer.put(`/api/frames/${w.frameId}/document`, { baseVersion: v, document: doc }).expect(200);
   }
   const cutting = (await c('cutter').post(`/api/frames/${w.frameId}/cutting`, {}).expect(201)).body as CuttingState;

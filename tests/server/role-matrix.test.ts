@@ -1,11 +1,19 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { frameSchema, frameSummarySchema, revisionSchema, revisionSummarySchema, saveFrameDocumentResponseSchema } from '@shared/api/frames';
+import {
+  frameSchema,
+  frameSummarySchema,
+  revisionComparisonSchema,
+  revisionSchema,
+  revisionSummarySchema,
+  saveFrameDocumentResponseSchema,
+} from '@shared/api/frames';
 import { projectDetailSchema, projectSummarySchema } from '@shared/api/projects';
 import { memberSchema, workshopSummarySchema } from '@shared/api/workshops';
 import type { Role } from '@shared/api/roles';
 import { binEntrySchema } from '@shared/api/bin';
 import { projectFileSchema } from '@shared/api/project-file';
+import { FrameRevision } from '../../server/modules/frames/frame-revision.entity';
 import { Frame } from '../../server/modules/frames/frame.entity';
 import { Project } from '../../server/modules/projects/project.entity';
 import { Membership } from '../../server/modules/workshops/membership.entity';
@@ -142,6 +150,47 @@ const ROUTES: Record<string, RouteCase> = {
     status: 200,
     schema: revisionSchema,
   },
+  'POST /frames/:id/revisions': {
+    method: 'post',
+    path: (w) => `/api/frames/${w.frameId}/revisions`,
+    body: () => ({ baseVersion: 1, name: 'sent to client' }),
+    allowed: EDITORS,
+    status: 200,
+    schema: revisionSummarySchema,
+  },
+  'GET /frames/:id/revisions/compare': {
+    method: 'get',
+    path: (w) => `/api/frames/${w.frameId}/revisions/compare?from=1&to=1`,
+    allowed: MEMBERS,
+    status: 200,
+    schema: revisionComparisonSchema,
+  },
+  'PATCH /frames/:id/revisions/:version': {
+    method: 'patch',
+    path: (w) => `/api/frames/${w.frameId}/revisions/1`,
+    body: () => ({ name: 'as cut' }),
+    allowed: EDITORS,
+    status: 200,
+    schema: revisionSummarySchema,
+  },
+  'POST /frames/:id/revisions/:version/restore': {
+    method: 'post',
+    path: (w) => `/api/frames/${w.frameId}/revisions/1/restore`,
+    body: () => ({ baseVersion: 2 }),
+    allowed: EDITORS,
+    status: 200,
+    schema: saveFrameDocumentResponseSchema,
+    prepare: async (w) => {
+      // Version 2 is stored and version 1 kept, so there is an earlier revision to go back to.
+      const em = ctx.orm.em.fork();
+      const frame = await em.findOneOrFail(Frame, { id: w.frameId });
+      em.create(FrameRevision, { frame, version: 1, document: frame.document, memberCount: frame.memberCount, savedAt: frame.savedAt, savedBy: null, name: null });
+      frame.version = 2;
+      frame.document = sampleDocument(3, 'two');
+      frame.memberCount = 3;
+      await em.flush();
+    },
+  },
   'DELETE /frames/:id': { method: 'delete', path: (w) => `/api/frames/${w.frameId}`, allowed: EDITORS, status: 204 },
   'POST /frames/:id/restore': {
     method: 'post',
@@ -197,11 +246,13 @@ async function fingerprint(w: World): Promise<unknown> {
   const projects = await em.find(Project, { workshop: w.workshopId }, { orderBy: { id: 'asc' } });
   const frames = await em.find(Frame, { project: { workshop: w.workshopId } }, { orderBy: { id: 'asc' } });
   const ownWorkshops = await em.count(Membership, {});
+  const revisions = await em.find(FrameRevision, { frame: { project: { workshop: w.workshopId } } }, { exclude: ['document'], orderBy: { version: 'asc' } });
   return {
     workshop: workshop.name,
     members: members.map((m) => [m.user.id, m.role]),
     projects: projects.map((p) => [p.id, p.name, p.notes, p.deletedAt]),
-    frames: frames.map((f) => [f.id, f.name, f.version, f.document, f.deletedAt]),
+    frames: frames.map((f) => [f.id, f.name, f.version, f.document, f.deletedAt, f.headName, f.headKept]),
+    revisions: revisions.map((r) => [r.version, r.name]),
     ownWorkshops,
   };
 }

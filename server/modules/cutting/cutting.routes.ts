@@ -13,6 +13,7 @@ import { offersOf, shelfOf, supplierFor, today } from '../orders/frame-shop.serv
 import { sendFile } from '../orders/orders.routes';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { Workshop } from '../workshops/workshop.entity';
+import { workshopSettings } from '../workshops/workshop-settings.service';
 import { cuttingState, latestSession, latestSessionKey, startSession, tick, untick } from './cutting.service';
 import { createShopCache, type ShopFile } from './shop-cache';
 import { frameHead, type FrameFacts } from '../frames/frame-read';
@@ -90,7 +91,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
       doc,
       q,
       printed: [head.name, head.projectName, head.workshopName, today()],
-      supplier: supplier ? [supplier.id, supplier.updatedAt.toISOString()] : null,
+      supplier: supplier ? [supplier.id, supplier.updatedAt.toISOString()] : mayUsePlan ? await workshopSettings(orm.em, head.workshopId) : null,
       shelf,
       session,
     };
@@ -109,13 +110,14 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
     const { frame } = await authorizeFrame(orm.em, userId, head.id, 'shop.read');
     const units = q.units ? { display: q.units, frac: q.frac === '32' ? (32 as const) : (16 as const) } : undefined;
     const base = `${frame.name}-r${frame.version}`;
-    const settings = { trim_mm: q.trim_mm ?? 10, minOffcut_mm: q.minOffcut_mm ?? 150 };
+    const settings = { trim_mm: q.trim_mm, minOffcut_mm: q.minOffcut_mm };
     const workshop = await orm.em.findOneOrFail(Workshop, { id: frame.project.workshop.id });
     const session = await latestSession(orm.em, frame.id);
     const frozen = doc === 'saw-list.pdf' && session && session.frameVersion === frame.version && !q.supplierId ? session.plan : null;
     const planning = needsPlan(doc, frozen !== null);
     const supplier = planning ? supplierFound : null;
     const shelf = planning ? await shelfOf(orm.em, frame.project.workshop.id) : [];
+    const stock = planning && !supplier ? (await workshopSettings(orm.em, frame.project.workshop.id)).stock : [];
     // The report, the plans (bars and sheets) and the document itself are CPU work: a worker thread does them.
     const out = await workers.run<ShopDocumentOutput>(
       {
@@ -125,7 +127,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
           document: frame.document,
           meta: { project: frame.project.name, frame: frame.name, revision: frame.version, date: today(), workshop: workshop.name, units, paper: q.paper },
           frozen,
-          offers: offersOf(supplier),
+          offers: offersOf(supplier, stock),
           shelf,
           settings,
           timeLimitMs: PLAN_TIME_LIMIT_MS,

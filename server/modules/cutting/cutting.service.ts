@@ -5,10 +5,12 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { can, type Role } from '@shared/api/roles';
 import type { CutSessionPlan, CuttingState } from '@shared/api/shop';
 import { planCutKeys } from '@shared/api/cut-plan';
+import { cuttingKey } from '@shared/engine/cutting-key';
 import { diffReports } from '@shared/engine/diff';
+import type { FrameReport } from '@shared/engine/report';
 import { UnprocessableError } from '../../errors';
 import type { FrameEntity } from '../frames/frame.entity';
-import { frameReport, planFrame, supplierFor } from '../orders/frame-shop.service';
+import { frameReport, planFrame, shopSettingsFor, supplierFor } from '../orders/frame-shop.service';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
 import { User } from '../users/user.entity';
 import { CutSession, type CutSessionEntity } from './cut-session.entity';
@@ -29,11 +31,23 @@ export async function latestSessionKey(em: EntityManager, frameId: string): Prom
   return rows[0] ? `${rows[0].id}@${rows[0].frame_version}` : null;
 }
 
+function reportOrNull(frame: FrameEntity): FrameReport | null {
+  try {
+    return frameReport(frame);
+  } catch {
+    return null;
+  }
+}
+
 export async function cuttingState(em: EntityManager, frame: FrameEntity, role: Role): Promise<CuttingState> {
   const session = await latestSession(em, frame.id);
   const ticks = session ? await em.find(CutTick, { session: session.id }, { orderBy: { tickedAt: 'asc' }, populate: ['tickedBy'] }) : [];
   let reuse: CuttingState['reuse'] = null;
-  if (session && session.frameVersion !== frame.version && ticks.length > 0) {
+  const report = reportOrNull(frame);
+  // A design the engine cannot read has nothing in common with the one being cut.
+  const currentKey = report ? cuttingKey(report.members) : `unreadable-${frame.version}`;
+  const sessionKey = session ? cuttingKey(session.plan.members) : null;
+  if (session && report && sessionKey !== currentKey && ticks.length > 0) {
     // The parts already cut (the first n members of each ticked mark) are the old parts; the current design's
     // report is the new one: the engine's what-changed diff says what to keep, re-cut and cut new.
     const count = new Map<string, number>();
@@ -45,7 +59,7 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
       return true;
     });
     try {
-      reuse = diffReports({ members: cut.map((m) => ({ ...m })) } as Parameters<typeof diffReports>[0], frameReport(frame));
+      reuse = diffReports({ members: cut.map((m) => ({ ...m })) } as Parameters<typeof diffReports>[0], report);
     } catch {
       reuse = null;
     }
@@ -55,10 +69,12 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
     frameName: frame.name,
     projectName: frame.project.name,
     currentVersion: frame.version,
+    currentCuttingKey: currentKey,
     session: session
       ? {
           id: session.id,
           frameVersion: session.frameVersion,
+          cuttingKey: sessionKey!,
           startedAt: session.startedAt.toISOString(),
           startedBy: session.startedBy ? { id: session.startedBy.id, name: session.startedBy.name } : null,
           plan: session.plan,
@@ -72,9 +88,10 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
 }
 
 /** Freezes the plan for the frame's current version (against the workshop's first supplier and the shelf). */
-export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, settings: { trim_mm: number; minOffcut_mm: number }): Promise<CutSessionEntity> {
+export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, asked: { trim_mm?: number; minOffcut_mm?: number }): Promise<CutSessionEntity> {
   const report = frameReport(frame);
   const supplier = await supplierFor(em, frame.project.workshop.id, undefined);
+  const settings = shopSettingsFor(report, asked);
   const planned = await planFrame(em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
   const plan: CutSessionPlan = {
     frameName: frame.name,
@@ -82,7 +99,7 @@ export async function startSession(em: EntityManager, frame: FrameEntity, userId
     plans: planned.plans,
     members: report.members.map((m) => ({ id: m.id, mark: m.mark, profile: m.profile, cut_length_mm: m.cut_length_mm })),
     settings,
-    units: report.units,
+    units: { display: report.units.display, frac: report.units.frac, mass: report.units.mass, date: report.units.date },
   };
   const s = em.create(CutSession, { frame, frameVersion: frame.version, plan, startedBy: em.getReference(User, userId) });
   await em.flush();

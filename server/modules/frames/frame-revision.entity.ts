@@ -4,7 +4,8 @@ import type { FrameDocumentJson } from '@shared/api/frames';
 import { User } from '../users/user.entity';
 import { Frame } from './frame.entity';
 
-// A document a frame had before a save replaced it: one row per superseded version.
+// A document a frame had at the end of an editing stretch (or named, or restored from), kept when a later save
+// replaced it. Versions in between were steps of the stretch and are folded into the next kept one.
 export const FrameRevision = defineEntity({
   name: 'FrameRevision',
   tableName: 'frame_revisions',
@@ -16,6 +17,7 @@ export const FrameRevision = defineEntity({
     memberCount: p.integer(),
     savedAt: p.datetime(),
     savedBy: p.manyToOne(User).nullable().deleteRule('set null'),
+    name: p.string().columnType('text').nullable(),
   },
   uniques: [{ name: 'frame_revisions_frame_version_unique', properties: ['frame', 'version'] }],
 });

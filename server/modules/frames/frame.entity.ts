@@ -19,6 +19,10 @@ export const Frame = defineEntity({
     memberCount: p.integer().default(0),
     savedAt: p.datetime().onCreate(() => new Date()),
     savedBy: p.manyToOne(User).nullable().deleteRule('set null'),
+    // The current document's place in the history: named, or closed (saved as a revision of its own), it is kept
+    // when the next save replaces it; otherwise it is one step of an editing stretch and the next save folds it in.
+    headName: p.string().columnType('text').nullable(),
+    headKept: p.boolean().default(false),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
     /** Set when it goes to the bin (see shared/api/bin.ts); purged BIN_DAYS later unless restored. */

@@ -1,8 +1,12 @@
 import { Router } from 'express';
-import type { Frame, FrameSummary, Revision, RevisionSummary, SaveFrameDocumentResponse } from '@shared/api/frames';
+import type { Frame, FrameSummary, Revision, RevisionComparison, RevisionSummary, SaveFrameDocumentResponse } from '@shared/api/frames';
 import {
+  compareRevisionsQuerySchema,
   createFrameRequestSchema,
   frameParamsSchema,
+  keepRevisionRequestSchema,
+  nameRevisionRequestSchema,
+  restoreRevisionRequestSchema,
   listFramesQuerySchema,
   renameFrameRequestSchema,
   revisionParamsSchema,
@@ -16,7 +20,11 @@ import { can } from '@shared/api/roles';
 import { authorizeBinnedFrame, authorizeFrame, authorizeProject } from '../access/access.service';
 import { frameDocumentText, frameEtag, frameHead, frameJson, notModified } from './frame-read';
 import {
+  compareRevisions,
   createFrame,
+  keepRevision,
+  nameRevision,
+  restoreRevision,
   deleteFrame,
   getRevision,
   listFrameSummaries,
@@ -83,6 +91,40 @@ export function framesRouter(orm: Orm): Router {
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
     const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
     res.json((await listRevisions(orm.em, frame)) satisfies RevisionSummary[]);
+  });
+
+  // Saving a revision ends the editing stretch: the caller must hold the version it means (409 otherwise).
+  router.post('/frames/:frameId/revisions', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const { baseVersion, name } = parseInput(keepRevisionRequestSchema, req.body);
+    res.json((await keepRevision(orm.em, frameId, baseVersion, name)) satisfies RevisionSummary);
+  });
+
+  // Before /revisions/:version, which would otherwise take "compare" for a version number.
+  router.get('/frames/:frameId/revisions/compare', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
+    const { from, to } = parseInput(compareRevisionsQuerySchema, req.query, 'query');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
+    res.json((await compareRevisions(orm.em, frame, from, to)) satisfies RevisionComparison);
+  });
+
+  router.patch('/frames/:frameId/revisions/:version', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId, version } = parseInput(revisionParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const { name } = parseInput(nameRevisionRequestSchema, req.body);
+    res.json((await nameRevision(orm.em, frame, version, name)) satisfies RevisionSummary);
+  });
+
+  router.post('/frames/:frameId/revisions/:version/restore', async (req, res) => {
+    const userId = currentUserId(req);
+    const { frameId, version } = parseInput(revisionParamsSchema, req.params, 'params');
+    const { frame } = await authorizeFrame(orm.em, userId, frameId, 'frame.write');
+    const { baseVersion } = parseInput(restoreRevisionRequestSchema, req.body);
+    res.json((await restoreRevision(orm.em, frame, userId, version, baseVersion)) satisfies SaveFrameDocumentResponse);
   });
 
   router.get('/frames/:frameId/revisions/:version', async (req, res) => {

@@ -2,13 +2,14 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { FrameReport } from '@shared/engine/report';
 import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { parseFrameDocument } from '@shared/model/parse';
-import { planShop, type ShelfOffcut, type ShopPlanResult, type StockOffer } from '@shared/shop/shop-plan';
+import { planShop, type ShelfOffcut, type ShopPlanResult, type ShopSettings, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
 import { UnprocessableError } from '../../errors';
 import type { FrameEntity } from '../frames/frame.entity';
 import { StockOffcut } from '../stock/stock-offcut.entity';
 import { Supplier, type SupplierEntity } from '../suppliers/supplier.entity';
 import { Workshop } from '../workshops/workshop.entity';
+import { workshopSettings } from '../workshops/workshop-settings.service';
 import { ensureMipSolver } from './mip';
 
 // Everything the shop outputs of one frame need: its report, the plan against a supplier's bars and the shelf,
@@ -31,13 +32,20 @@ export async function shopMeta(em: EntityManager, frame: FrameEntity, report: Fr
     revision: frame.version,
     date: today(),
     workshop: workshop.name,
-    units: opts.units ?? report.units,
+    units: { ...report.units, ...opts.units },
     paper: opts.paper ?? 'A4',
   };
 }
 
-export function offersOf(supplier: SupplierEntity | null): StockOffer[] {
-  return (supplier?.stock ?? []).map((s) => ({ profileId: s.profile, length_mm: s.length_mm, price: s.price }));
+/** The supplier's bars; with no supplier, the bars the workshop says it usually buys (for any profile). */
+export function offersOf(supplier: SupplierEntity | null, workshopStock: readonly { length_mm: number; price: number }[] = []): StockOffer[] {
+  if (!supplier) return workshopStock.map((s) => ({ profileId: null, length_mm: s.length_mm, price: s.price }));
+  return supplier.stock.map((s) => ({ profileId: s.profile, length_mm: s.length_mm, price: s.price }));
+}
+
+/** Trim and shortest offcut for a plan: what the request asks, else the frame's own (which new frames take from the workshop). */
+export function shopSettingsFor(report: FrameReport, asked: { trim_mm?: number; minOffcut_mm?: number } = {}): ShopSettings {
+  return { trim_mm: asked.trim_mm ?? report.settings.trim_mm, minOffcut_mm: asked.minOffcut_mm ?? report.settings.min_offcut_mm };
 }
 
 export async function shelfOf(em: EntityManager, workshopId: string): Promise<ShelfOffcut[]> {
@@ -59,10 +67,11 @@ export async function planFrame(
   em: EntityManager,
   frame: FrameEntity,
   report: FrameReport,
-  opts: { supplier: SupplierEntity | null; useShelf: boolean; trim_mm: number; minOffcut_mm: number; timeLimitMs: number },
+  opts: { supplier: SupplierEntity | null; useShelf: boolean; trim_mm?: number; minOffcut_mm?: number; timeLimitMs: number },
 ): Promise<ShopPlanResult> {
   if (report.cut_list.length === 0) throw new UnprocessableError('This frame has no members to cut yet');
   const shelf = opts.useShelf ? await shelfOf(em, frame.project.workshop.id) : [];
+  const stock = opts.supplier ? [] : (await workshopSettings(em, frame.project.workshop.id)).stock;
   await ensureMipSolver();
-  return planShop(report, offersOf(opts.supplier), shelf, { trim_mm: opts.trim_mm, minOffcut_mm: opts.minOffcut_mm }, opts.timeLimitMs);
+  return planShop(report, offersOf(opts.supplier, stock), shelf, shopSettingsFor(report, opts), opts.timeLimitMs);
 }

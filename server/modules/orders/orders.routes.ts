@@ -1,5 +1,5 @@
 import { Router, type Response } from 'express';
-import { createOrderSchema, orderParamsSchema, orderStatusPatchSchema } from '@shared/api/shop';
+import { createOrderSchema, orderParamsSchema, orderPdfQuerySchema, orderStatusPatchSchema, type SendPreview } from '@shared/api/shop';
 import { workshopParamsSchema } from '@shared/api/workshops';
 import type { Config } from '../../config';
 import type { Orm } from '../../db';
@@ -7,13 +7,13 @@ import { currentUserId } from '../../http/current-user';
 import { createMailer } from '../../mail/mailer';
 import { parseInput } from '../../validate';
 import { asNotFound, authorizeWorkshop } from '../access/access.service';
-import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv, orderPdf, sendOrder, toOrderDetail } from './orders.service';
+import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv, orderPdf, sendOrder, supplierMessage, toOrderDetail } from './orders.service';
 
 /** Sends a generated file as a download with a safe file name. */
-export function sendFile(res: Response, body: Buffer | string, type: string, filename: string): void {
+export function sendFile(res: Response, body: Buffer | string, type: string, filename: string, disposition: 'attachment' | 'inline' = 'attachment'): void {
   const safe = filename.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 120);
   res.setHeader('Content-Type', type);
-  res.set('Content-Disposition', `attachment; filename="${safe}"`);
+  res.set('Content-Disposition', `${disposition}; filename="${safe}"`);
   res.set('Cache-Control', 'private, no-store');
   res.send(body);
 }
@@ -47,8 +47,16 @@ export function ordersRouter(orm: Orm, config: Config): Router {
 
   router.get('/orders/:orderId/order.pdf', async (req, res) => {
     const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    const { copy, view } = parseInput(orderPdfQuerySchema, req.query, 'query');
     const o = await orderWithRole(currentUserId(req), orderId, 'read');
-    sendFile(res, await orderPdf(o), 'application/pdf', `order-${o.reference}.pdf`);
+    sendFile(res, await orderPdf(o, copy === 'supplier'), 'application/pdf', `order-${o.reference}.pdf`, view === 'inline' ? 'inline' : 'attachment');
+  });
+
+  // What "Send" would mail, to show and confirm first; for those who may send.
+  router.get('/orders/:orderId/send-preview', async (req, res) => {
+    const { orderId } = parseInput(orderParamsSchema, req.params, 'params');
+    const o = await orderWithRole(currentUserId(req), orderId, 'project.write');
+    res.json((await supplierMessage(orm.em, o)) satisfies SendPreview);
   });
 
   router.get('/orders/:orderId/order.csv', async (req, res) => {

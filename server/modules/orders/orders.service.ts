@@ -1,7 +1,7 @@
 import { recordActivity } from '../activity/activity.service';
 import { randomBytes } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { OrderContents, OrderDetail, OrderSummary } from '@shared/api/shop';
+import type { OrderContents, OrderDetail, OrderSummary, SendPreview } from '@shared/api/shop';
 import type { createOrderSchema } from '@shared/api/shop';
 import { orderListCsv } from '@shared/shop/csv-export';
 import { lengthText, moneyText } from '@shared/shop/format';
@@ -101,7 +101,22 @@ export function orderPdf(o: OrderEntity, forSupplier = false): Promise<Buffer> {
 }
 
 export function orderCsv(o: OrderEntity): string {
-  return orderListCsv(o.contents.order);
+  return orderListCsv(o.contents.order, o.contents.meta.units);
+}
+
+/**
+ * The e-mail to the supplier as it will go out: to the supplier's order address, the order and what to supply in
+ * the chosen way of buying, and the supplier's copy of the PDF. Nothing of the shop's own: no comparison with the
+ * other way of buying, no offcuts from its shelf, no client.
+ */
+export async function supplierMessage(em: EntityManager, o: OrderEntity): Promise<SendPreview> {
+  const supplier = o.supplier ? await em.findOne(Supplier, { id: o.supplier.id }) : null;
+  return {
+    to: supplier?.email ?? o.contents.supplierEmail,
+    subject: `Order ${o.reference}: ${o.contents.meta.project} (${o.contents.meta.workshop})`,
+    text: `${o.contents.supplierText ?? o.contents.text.split('\n\nFor comparison')[0]}\n\nThe order list is attached as a PDF.\n`,
+    attachment: { filename: `order-${o.reference}.pdf`, url: `/api/orders/${o.id}/order.pdf?copy=supplier&view=inline` },
+  };
 }
 
 /**
@@ -116,17 +131,17 @@ export async function sendOrder(em: EntityManager, orderId: string, userId: stri
     throw new ConflictError(`Order ${current.reference} is already ${current.status}; it is not sent again`, { status: current.status });
   }
   const o = await findOrder(em, orderId);
-  const supplier = o.supplier ? await em.findOne(Supplier, { id: o.supplier.id }) : null;
-  const to = supplier?.email ?? o.contents.supplierEmail;
+  const message = await supplierMessage(em, o);
+  const to = message.to;
   try {
     const pdf = await orderPdf(o, true);
     const sent = await mailer.send({
       kind: 'order',
       to,
-      subject: `Order ${o.reference}: ${o.contents.meta.project} (${o.contents.meta.workshop})`,
-      text: `${o.contents.supplierText ?? o.contents.text.split('\n\nFor comparison')[0]}\n\nThe order list is attached as a PDF.\n`,
+      subject: message.subject,
+      text: message.text,
       workshopId: o.workshop.id,
-      attachments: [{ filename: `order-${o.reference}.pdf`, content: pdf, contentType: 'application/pdf' }],
+      attachments: [{ filename: message.attachment.filename, content: pdf, contentType: 'application/pdf' }],
     });
     await em.nativeUpdate(Order, { id: orderId, status: 'sending' }, { status: 'sent', sentAt: new Date(), sentBy: userId, sentTo: to, messageId: sent.messageId });
     const frame = o.frame ? await em.findOne(Frame, { id: o.frame.id }, { fields: ['project'] }) : null;

@@ -84,7 +84,8 @@ export async function importProjectFile(em: EntityManager, workshopId: string, u
     const importer = tem.getReference(User, userId);
     const p = tem.create(Project, { workshop: tem.getReference(Workshop, workshopId), ...file.project });
     for (const f of file.frames) {
-      const frame = tem.create(Frame, { project: p, name: f.name, document: f.document, version: f.version, memberCount: f.memberCount, savedAt: new Date(f.savedAt), savedBy: importer });
+      // The imported state is kept as a revision when the importer's first save replaces it.
+      const frame = tem.create(Frame, { project: p, name: f.name, document: f.document, version: f.version, memberCount: f.memberCount, savedAt: new Date(f.savedAt), savedBy: importer, headKept: true });
       for (const r of f.revisions) {
         tem.create(FrameRevision, { frame, version: r.version, document: r.document, memberCount: r.memberCount, savedAt: new Date(r.savedAt), savedBy: null });
       }

@@ -2,6 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { CustomProfileView, ImportResult, Offcut } from '@shared/api/shop';
 import { listProfiles } from '@shared/catalog/profiles';
 import { parseOffcutsCsv } from '@shared/shop/offcut-import';
+import { workshopSettings } from '../workshops/workshop-settings.service';
 import { parseProfilesCsv } from '@shared/shop/profile-import';
 import { Workshop } from '../workshops/workshop.entity';
 import { CustomProfile, type CustomProfileEntity } from './custom-profile.entity';
@@ -27,7 +28,8 @@ export async function listOffcuts(em: EntityManager, workshopId: string): Promis
 
 /** Good rows go on the shelf (in one transaction); bad rows come back with line numbers and reasons. */
 export async function importOffcuts(em: EntityManager, workshopId: string, csv: string): Promise<ImportResult> {
-  const parsed = parseOffcutsCsv(csv, await profileResolver(em, workshopId));
+  const { units } = await workshopSettings(em, workshopId);
+  const parsed = parseOffcutsCsv(csv, await profileResolver(em, workshopId), { bare: units.length, decimalComma: units.decimalComma });
   await em.transactional(async (tx) => {
     for (const r of parsed.rows) tx.create(StockOffcut, { workshop: tx.getReference(Workshop, workshopId), profile: r.value.profileId, lengthMm: r.value.length_mm, qty: r.value.qty });
   });

@@ -8,10 +8,13 @@ import {
   updateMemberRequestSchema,
   workshopParamsSchema,
 } from '@shared/api/workshops';
+import { workshopSettingsSchema, type WorkshopSettingsView } from '@shared/api/workshop-settings';
+import { can } from '@shared/api/roles';
 import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
 import { authorizeWorkshop } from '../access/access.service';
+import { saveWorkshopSettings, workshopSettings } from './workshop-settings.service';
 import { addMember, createWorkshop, listMembers, listWorkshops, removeMember, renameWorkshop, updateMemberRole } from './workshops.service';
 
 export function workshopsRouter(orm: Orm): Router {
@@ -33,6 +36,20 @@ export function workshopsRouter(orm: Orm): Router {
     const role = await authorizeWorkshop(orm.em, userId, workshopId, 'workshop.manage');
     const { name } = parseInput(renameWorkshopRequestSchema, req.body);
     res.json((await renameWorkshop(orm.em, workshopId, role, name)) satisfies WorkshopSummary);
+  });
+
+  // Every member reads the settings (they shape what each one sees); only an owner changes them.
+  router.get('/workshops/:workshopId/settings', async (req, res) => {
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    const role = await authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'read');
+    res.json({ settings: await workshopSettings(orm.em, workshopId), canEdit: can(role, 'workshop.manage') } satisfies WorkshopSettingsView);
+  });
+
+  router.put('/workshops/:workshopId/settings', async (req, res) => {
+    const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
+    await authorizeWorkshop(orm.em, currentUserId(req), workshopId, 'workshop.manage');
+    const settings = parseInput(workshopSettingsSchema, req.body);
+    res.json({ settings: await saveWorkshopSettings(orm.em, workshopId, settings), canEdit: true } satisfies WorkshopSettingsView);
   });
 
   router.get('/workshops/:workshopId/members', async (req, res) => {

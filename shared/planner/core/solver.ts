@@ -15,6 +15,7 @@ import { lexRefine } from './lex-refine';
 import { compress, greedyPack, patternKey, type FitRule, type OpenRule } from './greedy';
 import { Master, type LpPoint } from './master';
 import { mbsPack } from './mbs';
+import { perfectPack } from './perfect-fill';
 import { Repacker } from './repack';
 import { roundUpBound, solutionBars, solutionCost, type Pattern, type PatternUse, type Problem } from './problem';
 
@@ -28,6 +29,15 @@ const SCHEDULE_MS = 2000;
 const ROOT_SHARE = 0.7;
 /** Share of the time limit the minimum-bin-slack restarts may take when they do not reach the bound at once. */
 const MBS_SHARE = 0.01;
+/**
+ * Perfect packing (./perfect-fill) when the parts fill the bound's bars exactly: its share of the schedule, bars placed
+ * per bar of the list in the bar-by-bar search, and nodes of the exact-cover search.
+ */
+const PERFECT_SHARE = 0.35;
+const PERFECT_FILL_NODES_PER_BAR = 20;
+const PERFECT_COVER_NODES = 200_000;
+/** Longer lists (500 three-part pieces) keep the stage's time for repacking, the LP and its dives, which solve them. */
+const PERFECT_MAX_PIECES = 480;
 /** Enumeration nodes per bar when minimum bin slack completes a dive node's residual: cheap enough to run at every node. */
 const RESIDUAL_MBS_NODES = 2000;
 /**
@@ -146,6 +156,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
   const best = (): Incumbent => inc as Incumbent;
   let lexProven = false;
   const need = p.sizes.reduce((s, size, i) => s + size * p.demand[i], 0);
+  const parts0 = p.demand.reduce((a, b) => a + b, 0);
   // The cost bound proves the cost; the bar count and the stock length at that cost need proofs of their own, except
   // on one stock type, where both follow from the cost.
   /** At a proven least cost, settle the bar count and stock length (./lex-refine). */
@@ -198,6 +209,17 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     });
     const qty = p.types[0].qty;
     if (qty === null || bars.length <= qty) offer(onFirstStock(bars));
+  }
+  // Parts adding up to exactly the bound's bars: every bar is filled exactly, which a search of its own finds where
+  // minimum bin slack, repacking and the LP dives end a bar over (lists cut from whole bars).
+  if (singleBarObjective && best().cost > lower + improveTol && need === lower * p.types[0].capacity && parts0 <= PERFECT_MAX_PIECES) {
+    const until = t0 + SCHEDULE_MS * PERFECT_SHARE;
+    const bars = perfectPack(p.sizes, p.demand, p.types[0].capacity, {
+      fillNodes: PERFECT_FILL_NODES_PER_BAR * lower,
+      coverNodes: PERFECT_COVER_NODES,
+      outOfTime: () => opts.now() > Math.min(until, opts.deadline),
+    });
+    if (bars) offer(onFirstStock(bars));
   }
   /** Repack until `until`; after a dive, first catch up with a better packing the dive found. */
   function* repack(until: number, afterDive: boolean, stallMs = Infinity): Generator<CoreProgress, void, void> {

@@ -8,6 +8,7 @@ import type {
   OrderDetail,
   OrderSummary,
   OutboxList,
+  SendPreview,
   Supplier,
   SupplierInput,
 } from '@shared/api/shop';
@@ -67,6 +68,7 @@ export function useShopApi() {
       list: (workshopId: string) => call<OrderSummary[]>('GET', `/workshops/${workshopId}/orders`),
       get: (id: string) => call<OrderDetail>('GET', `/orders/${id}`),
       create: (workshopId: string, body: CreateOrderRequest) => call<OrderDetail>('POST', `/workshops/${workshopId}/orders`, body),
+      sendPreview: (id: string) => call<SendPreview>('GET', `/orders/${id}/send-preview`),
       send: (id: string) => call<OrderDetail>('POST', `/orders/${id}/send`),
       received: (id: string) => call<OrderDetail>('PATCH', `/orders/${id}`, { status: 'received' }),
       remove: (id: string) => call<void>('DELETE', `/orders/${id}`),

@@ -114,6 +114,8 @@ export type ModelOptions = {
   colourByLoad: boolean;
   /** Members and modules being dragged: drawn faint where they were. */
   faded: ReadonlySet<string>;
+  /** A mass as the frame reads it ("12.4 kg", "27.3 lb"). */
+  massText: (kg: number) => string;
 };
 
 function label(ctx: CanvasRenderingContext2D, text: string, cx: number, cy: number, size: number): void {
@@ -160,7 +162,7 @@ export function drawModules(ctx: CanvasRenderingContext2D, o: ModelOptions): voi
       ctx.font = '600 13px Barlow, sans-serif';
       ctx.fillText(m.name, s.x + 8, s.y + 8);
       ctx.font = '500 12px Barlow, sans-serif';
-      ctx.fillText(`${Math.round(m.mass_kg * 10) / 10} kg`, s.x + 8, s.y + 24);
+      ctx.fillText(o.massText(m.mass_kg), s.x + 8, s.y + 24);
       ctx.restore();
     } else if (o.compact && s.w > 24 && s.h > 14) {
       ctx.fillStyle = MODULE_EDGE[m.kind];

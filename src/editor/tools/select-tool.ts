@@ -6,13 +6,14 @@ import { snapMove, snapValue, type SnapTarget } from '@shared/editing/snap';
 import { screenAxis, viewDelta, type Rect2 } from '@shared/editing/views';
 import { HANDLE_PX } from '../draw/overlay';
 import { swapPicked } from '../module-moves';
+import { applyModuleDrop, planModuleDrag, type ModuleDrop } from './module-drag';
 import type { SnapCue } from '../overlay';
 import { clearOverlay, dragged, type Phase, type PointerInput, type Tool, type ToolContext } from './tool';
 
 type Gesture =
   | { mode: 'move'; start: PointerInput; rects: Rect2[]; members: Set<string>; modules: Set<string> }
   | { mode: 'stretch'; start: PointerInput; member: SceneMember; item: ViewItem; which: 'start' | 'end'; along: 'h' | 'v' }
-  | { mode: 'module'; start: PointerInput; item: ViewItem; inBay: boolean }
+  | { mode: 'module'; start: PointerInput; item: ViewItem }
   | { mode: 'box'; start: PointerInput; additive: boolean };
 
 const HIT_PAD_PX = 5;
@@ -23,13 +24,15 @@ function selected(ctx: ToolContext): { members: Set<string>; modules: Set<string
 }
 
 /**
- * Pick, box-select, move, stretch by end handles, and drag a module onto another to swap them. The drag shows a
+ * Pick, box-select, move, stretch by end handles, and drag a module (see module-drag: onto another to swap them,
+ * between bays to reorder the run, elsewhere to seat it). The drag shows a
  * ghost on the overlay; the document changes once, on release (one undo step).
  */
 export function createSelectTool(): Tool {
   let phase: Phase = 'idle';
   let g: Gesture | null = null;
-  let result: { dh: number; dv: number; value?: number; target?: SnapTarget | null; swapWith?: string | null } = { dh: 0, dv: 0 };
+  let result: { dh: number; dv: number; value?: number; target?: SnapTarget | null } = { dh: 0, dv: 0 };
+  let drop: ModuleDrop | null = null;
 
   const padMm = (ctx: ToolContext, px: number) => px / ctx.cam.scale;
 
@@ -53,6 +56,7 @@ export function createSelectTool(): Tool {
 
     down(p, ctx) {
       result = { dh: 0, dv: 0 };
+      drop = null;
       phase = 'pointing';
       g = pickHandle(p, ctx);
       if (g) return;
@@ -80,7 +84,7 @@ export function createSelectTool(): Tool {
         return;
       }
       if (hit.kind === 'module' && sel.members.size === 0 && sel.modules.size === 1) {
-        g = { mode: 'module', start: p, item: hit, inBay: ctx.scene.modules[hit.index].bay !== null };
+        g = { mode: 'module', start: p, item: hit };
         return;
       }
       const rects = [
@@ -141,29 +145,12 @@ export function createSelectTool(): Tool {
           break;
         }
         case 'module': {
-          const dragging = g.item;
-          const over = ctx.items.modules.find((i) => i.id !== dragging.id && p.h >= i.x0 && p.h <= i.x1 && p.v >= i.y0 && p.v <= i.y1);
-          let dh = p.h - g.start.h;
-          let dv = p.v - g.start.v;
-          if (!over) {
-            // A module's base, sides and top snap to member faces and other modules, like a member's edges do.
-            const own = `${ctx.scene.modules[dragging.index].name} edge`;
-            const all = ctx.targets(new Set());
-            const th = all.h.filter((t) => t.label !== own);
-            const tv = all.v.filter((t) => t.label !== own);
-            // Along a run the bay places the module: only the cross axes snap.
-            const sh = g.inBay && ctx.scene.modules[dragging.index].run !== null ? { delta: dh, target: null } : snapMove(th, [dragging.x0, dragging.x1], dh, tol, grid);
-            const sv = snapMove(tv, [dragging.y0, dragging.y1], dv, tol, grid);
-            dh = sh.delta;
-            dv = sv.delta;
-            if (sh.target) cues.push({ axis: 'h', target: sh.target, h: sh.target.value, v: p.v });
-            if (sv.target) cues.push({ axis: 'v', target: sv.target, h: p.h, v: sv.target.value });
-          }
-          result = { dh, dv, swapWith: over ? over.id : null };
-          o.ghost = [{ x0: g.item.x0 + dh, x1: g.item.x1 + dh, y0: g.item.y0 + dv, y1: g.item.y1 + dv }];
-          o.swapTarget = over ?? null;
-          const named = cues.find((c) => c.target.kind !== 'grid');
-          o.note = over ? `Swap with ${ctx.scene.modules[over.index].name}` : named ? `${named.target.label}` : g.inBay ? 'Drop on another module to swap' : null;
+          const plan = planModuleDrag(ctx, g.item, g.start, p, snapping);
+          drop = plan.drop;
+          o.ghost = [plan.ghost];
+          o.swapTarget = plan.swapTarget;
+          o.note = plan.note;
+          cues.push(...plan.cues);
           break;
         }
       }
@@ -213,14 +200,13 @@ export function createSelectTool(): Tool {
         }
         case 'module': {
           const m = ctx.scene.modules[gesture.item.index];
-          if (result.swapWith) {
-            const r = swapPicked(ctx.doc, ctx.scene, [m.id, result.swapWith]);
-            if (r.ok) ctx.apply(diffDocuments(ctx.doc, r.doc, r.label), { summarise: true });
-            else ctx.refuse?.('Swap modules', r.reason);
-            return;
-          }
-          const d = viewDelta(ctx.view, result.dh, result.dv);
-          ctx.apply(diffDocuments(ctx.doc, moveModules(ctx.doc, new Set([m.id]), d), `Move ${m.name}`));
+          const d = drop;
+          drop = null;
+          if (!d) return;
+          const r = d.kind === 'swap' ? swapPicked(ctx.doc, ctx.scene, [m.id, d.with]) : applyModuleDrop(ctx, m.id, d);
+          const what = d.kind === 'swap' ? 'Swap modules' : d.kind === 'move' ? `Move ${m.name}` : 'Move bay';
+          if (!r.ok) ctx.refuse?.(what, r.reason);
+          else if (r.doc !== ctx.doc) ctx.apply(diffDocuments(ctx.doc, r.doc, r.label), { summarise: d.kind !== 'move' });
           return;
         }
       }

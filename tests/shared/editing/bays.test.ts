@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { addBay, moveBay, moveModuleOutOfRun, moveModuleToBay, removeBay, setBayWidth, trySwapModules } from '@shared/editing/bays';
+import { addBay, moveBay, moveModuleOutOfRun, moveModuleToBay, removeBay, setBayWidth } from '@shared/editing/bays';
+import { trySwapModules } from '@shared/editing/swap';
 import { applyChange, diffDocuments, invertChange } from '@shared/editing/change';
 import type { EditOutcome } from '@shared/editing/outcome';
 import { diffReports } from '@shared/engine/diff';
@@ -177,11 +178,18 @@ describe('swapping modules', () => {
     expect(ok(trySwapModules(once.doc, 'tank', 'cooler')).doc).toEqual(doc);
   });
 
+  it('two modules of one stack exchange levels rather than bays', () => {
+    const out = ok(trySwapModules(doc, 'drawer-mid', 'drawer-low'));
+    expect(out.doc.runs[0].bays[1]).toMatchObject({ module: 'drawer-mid', stack: ['drawer-low', 'sink'] });
+    expect(out.doc.runs[0].bays.map((b) => b.id)).toEqual(doc.runs[0].bays.map((b) => b.id));
+    expect(out.label).toBe('Swap “Cutlery drawer” and “Pan drawer” in bay 2');
+  });
+
   it('says why it cannot, in plain words', () => {
     const free = { ...doc, runs: doc.runs.map((r) => ({ ...r, bays: r.bays.map((b) => (b.id === 'bay-tank' ? { id: b.id, width_mm: 300 } : b)) })) };
-    const reasons = [trySwapModules(doc, 'drawer-mid', 'sink'), trySwapModules(doc, 'cooler', 'cooler'), trySwapModules(free, 'cooler', 'tank')].map(refused);
-    expect(reasons[0]).toMatch(/“Cutlery drawer” and “Sink with tap” are stacked in the same bay/);
-    expect(reasons[2]).toMatch(/^“Fresh water tank 25 L” stands free/);
+    const reasons = [trySwapModules(doc, 'cooler', 'cooler'), trySwapModules(free, 'cooler', 'tank')].map(refused);
+    expect(reasons[0]).toMatch(/^Pick two different modules/);
+    expect(reasons[1]).toMatch(/^“Fresh water tank 25 L” stands free/);
     for (const r of reasons) expectPlainWords(r, doc);
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { addBay, removeBay, trySwapModules } from '@shared/editing/bays';
+import { addBay, removeBay } from '@shared/editing/bays';
+import { trySwapModules } from '@shared/editing/swap';
 import { layoutOf } from '@shared/editing/layout';
 import { makeRunFromMembers } from '@shared/editing/make-run';
 import type { EditOutcome } from '@shared/editing/outcome';

@@ -26,7 +26,7 @@ describe('parseFrameDocument', () => {
     expect(d.schemaVersion).toBe(CURRENT_SCHEMA_VERSION);
     // Defaults named in settings.ts: ISO 2768-1 m, kerf 3 mm (REFERENCES.md, common practice), shock 2.5 (2–3 g CP).
     expect(d.settings).toMatchObject({ toleranceClass: 'm', kerf_mm: 3, shockFactor: 2.5, deflectionLimitN: 240, safetyFactor: 1.65 });
-    expect(d.units).toEqual({ display: 'mm', frac: 16 });
+    expect(d.units).toEqual({ display: 'mm', frac: 16, mass: 'kg', date: 'iso', decimalComma: false });
   });
 
   it('accepts its own output (round trip)', () => {

@@ -45,10 +45,19 @@ describe('CSV export', () => {
 
   it('writes the order list with stock bars and the cut-to-length lines', () => {
     const order = orderList(jobs.map((j) => ({ ...j, plan: planCutsSync(j.job, { timeLimitMs: 200 }) })), 'EUR', { cutFee: 1.5 });
-    const rows = cells(orderListCsv(order));
-    expect(rows[1]).toEqual(['stock bar', '40×40 slot 8', '6000', '2', '42', '84', '']);
-    expect(rows[2]).toEqual(['offcut on hand', '20×20 slot 6', '1200', '1', '0', '0', '']);
+    const rows = cells(orderListCsv(order, { display: 'mm', frac: 16 }));
+    expect(rows[1]).toEqual(['stock bar', '40×40 slot 8', '6000', '6000 mm', '2', '42', '84', '']);
+    expect(rows[2]).toEqual(['offcut on hand', '20×20 slot 6', '1200', '1200 mm', '1', '0', '0', '']);
     expect(rows.filter((r) => r[0] === 'cut to length').length).toBe(4);
-    expect(rows.at(-2)).toEqual(['total stock bars', '', '', '2', '', '84', '']);
+    expect(rows.at(-2)).toEqual(['total stock bars', '', '', '', '2', '', '84', '']);
+  });
+
+  it('writes the order list lengths in fractional inches for an inch shop', () => {
+    const order = orderList(jobs.map((j) => ({ ...j, plan: planCutsSync(j.job, { timeLimitMs: 200 }) })), 'EUR', { cutFee: 1.5 });
+    const rows = cells(orderListCsv(order, { display: 'in', frac: 32 }));
+    // 6000 mm / 25.4 = 236.2205 in → nearest 1/32 is 236 7/32 (236.21875); 1 in = 25.4 mm exactly (NIST SP 811).
+    expect(rows[1][3]).toBe('236 7/32"');
+    // 1120 mm = 44.0945 in → 44 3/32 (44.09375) to the nearest 1/32.
+    expect(rows.find((r) => r[0] === 'cut to length' && r[2] === '1120')?.[3]).toBe('44 3/32"');
   });
 });

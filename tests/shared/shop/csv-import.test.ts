@@ -70,3 +70,18 @@ describe('custom profile import', () => {
     expect(() => parseSize('40')).toThrow(/size/);
   });
 });
+
+describe('offcut import in the workshop unit', () => {
+  const known = (t: string) => (t === '40x40-s8' ? t : null);
+  // 1 in = 25.4 mm exactly (NIST SP 811, B.8)
+  it('reads a bare length as inches in an inch shop', () => {
+    const r = parseOffcutsCsv('profile,length,qty\n40x40-s8,29 1/2,2\n40x40-s8,2 ft 3-1/2 in,1\n', known, { bare: 'in' });
+    expect(r.errors).toEqual([]);
+    expect(r.rows.map((x) => x.value.length_mm)).toEqual([749.3, 698.5]);
+  });
+
+  it('keeps millimetres where the header names them, and reads a quoted decimal comma when set', () => {
+    const r = parseOffcutsCsv('Profile,Length (mm),Qty\n40x40-s8,750,1\n40x40-s8,"1,5 m",1\n', known, { bare: 'in', decimalComma: true });
+    expect(r.rows.map((x) => x.value.length_mm)).toEqual([750, 1500]);
+  });
+});

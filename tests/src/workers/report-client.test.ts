@@ -127,4 +127,22 @@ describe('the report worker client', () => {
     expect(reports[1].changes).not.toBeNull();
     expect(reports[0].changes).toBeNull();
   });
+
+  it('delivers the report as the engine sent it, read from its text once, when first asked for', () => {
+    const { worker, client, reports } = setUp();
+    const doc = demoFrameDocument();
+    let sent = '';
+    client.request(1, doc, { reset: true });
+    worker.answer((req) => {
+      const reply = createReportEngine()(req);
+      if (reply.type === 'report') sent = reply.reportJson;
+      return reply;
+    });
+    expect(reports).toHaveLength(1);
+    const first = reports[0].report;
+    // The same object on every read (the panels compare reports by identity), equal to what the engine sent.
+    expect(reports[0].report).toBe(first);
+    expect(first).toEqual(JSON.parse(sent));
+    expect(first.members.map((m) => m.id).sort()).toEqual(doc.members.map((m) => m.id).sort());
+  });
 });
