@@ -36,7 +36,7 @@ describe('sheet-goods choices kept with the frame', () => {
   it('the views draw the box the frame chose: under-mount boxes are wider between the same uprights', () => {
     const under = { ...doc, goods: goodsSettingsSchema.parse({ slide: 'under-mount' }) };
     const drawerWidth = (d: typeof doc) => {
-      const b = sceneFromReport(d, computeReport(d)).goods.find((g) => g.kind === 'drawer' && g.id.includes('cooler-drawer'));
+      const b = (sceneFromReport(d, computeReport(d)).goods ?? []).find((g) => g.kind === 'drawer' && g.id.includes('cooler-drawer'));
       expect(b).toBeDefined();
       // The galley runs along x: a drawer box's width is its x extent.
       return b!.box.max[0] - b!.box.min[0];
