@@ -34,6 +34,7 @@ export function layoutOf(doc: FrameDocument): Layout {
       profileName: g.info.name,
       slot_mm: g.info.profile.slot_mm,
       mark: g.member.mark ?? null,
+      title: g.member.name?.trim() || roleOf(g.member),
       cutLength_mm: 0,
       utilisation: null,
     })),

@@ -53,6 +53,7 @@ export function sceneFromDocument(doc: FrameDocument, previous: Scene | null): S
       profileName: g.info.name,
       slot_mm: g.info.profile.slot_mm,
       mark: same ? was.mark : null,
+      title: was?.title ?? (m.name?.trim() || roleOf(m)),
       cutLength_mm: same ? was.cutLength_mm + (length - wasLength) : length,
       utilisation: same ? was.utilisation : null,
     };

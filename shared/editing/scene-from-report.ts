@@ -40,6 +40,7 @@ export function sceneFromReport(doc: FrameDocument, report: FrameReport, sheetGo
       profileName: m.profile_name,
       slot_mm: info.profile.slot_mm,
       mark: m.mark,
+      title: m.title,
       cutLength_mm: m.cut_length_mm,
       utilisation: utilisation.get(m.id) ?? null,
     };

@@ -19,6 +19,8 @@ export type SceneMember = {
   /** Slot opening (mm) for drawing the slot; null for plain sections. */
   slot_mm: number | null;
   mark: string | null;
+  /** How the builder knows it ("rail C (top rail)"), never the record id. */
+  title: string;
   cutLength_mm: number;
   /** Highest ratio of a load check to its limit; null when nothing loads it. */
   utilisation: number | null;

@@ -55,6 +55,7 @@ export function sceneMember(id: string, axis: 'x' | 'y' | 'z', b: Box, extra: Pa
     profileName: '40×40 slot 8',
     slot_mm: 8.2,
     mark: null,
+    title: axis === 'z' ? 'upright' : axis === 'x' ? 'rail' : 'cross-member',
     cutLength_mm: 0,
     utilisation: null,
     ...extra,
