@@ -76,7 +76,7 @@ export async function shopDocument(input: ShopDocumentInput): Promise<ShopDocume
     case 'cut-list.csv':
       return { body: cutListCsv(cutList, meta.units), contentType: CSV, suffix: 'cut-list.csv' };
     case 'order-list.csv':
-      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee }), meta.units), contentType: CSV, suffix: 'order-list.csv' };
+      return { body: orderListCsv(orderList(planned!.planned, input.currency, { cutFee: input.cutFee }, meta.units), meta.units), contentType: CSV, suffix: 'order-list.csv' };
     case 'sheet-plan.pdf':
       return { body: await sheetPlanPdf(frameSheetPlans(frame, report), meta), contentType: PDF, suffix: 'sheet-plan.pdf' };
   }

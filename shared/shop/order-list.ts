@@ -1,17 +1,18 @@
 import { orderList as plannerOrderList, type CutJob, type CutPlan } from '../planner';
+import { lengthText, type Readout } from '../display/format';
 import type { ConsideredBar, OrderList } from './types';
 
 /** One profile's job and plan as the planner took and gave them, with the supplier's bars it was offered. */
 export type PlannedProfile = { profileId: string; profileName: string; job: CutJob; plan: CutPlan; considered?: ConsideredBar[] };
 
 /** Which of the offered bars the plan buys, and on what grounds. */
-export function explainChoice(p: PlannedProfile): { considered: ConsideredBar[]; choice: string } {
+export function explainChoice(p: PlannedProfile, units?: Readout): { considered: ConsideredBar[]; choice: string } {
   const considered = (p.considered ?? []).map((c) => ({
     ...c,
     used: c.offered ? p.plan.bars.filter((b) => b.stock === c.length_mm && b.price === c.price && !isOnHand(p.job, b.stockIndex)).length : 0,
   }));
   const offered = considered.filter((c) => c.offered);
-  const bought = offered.filter((c) => c.used > 0).map((c) => `${c.used} × ${c.length_mm} mm at ${c.price}`);
+  const bought = offered.filter((c) => c.used > 0).map((c) => `${c.used} × ${units ? lengthText(c.length_mm, units) : `${c.length_mm} mm`} at ${c.price}`);
   const basis = p.plan.optimal
     ? 'the least cost, then the fewest bars, then the least waste, proven'
     : `the least cost found in the time allowed (at most ${Math.round(p.plan.gap * 1000) / 10} % above the bound)`;
@@ -33,12 +34,13 @@ const money = (v: number): number => Math.round(v * 100) / 100;
  * The order list across profiles: the stock planner's grouped order list for each profile (bars by length with
  * cost, and the same parts bought cut to length), with totals so the two ways of buying can be compared.
  */
-export function orderList(profiles: readonly PlannedProfile[], currency: string, terms: CutToLengthTerms): OrderList {
+/** `units`: the frame's readout, for the lengths in the words that explain the choice of bars. */
+export function orderList(profiles: readonly PlannedProfile[], currency: string, terms: CutToLengthTerms, units?: Readout): OrderList {
   const out = profiles.map((p) => ({
     profileId: p.profileId,
     profileName: p.profileName,
     order: plannerOrderList(p.profileId, p.job, p.plan, { cutFee: terms.cutFee, pricePerMetre: terms.pricePerMetre?.[p.profileId] }),
-    ...(p.considered ? explainChoice(p) : {}),
+    ...(p.considered ? explainChoice(p, units) : {}),
   }));
   return {
     currency,

@@ -70,7 +70,7 @@ export async function createOrder(em: EntityManager, workshopId: string, userId:
   const report = frameReport(frame);
   const plan = await planFrame(em, frame, report, { supplier, useShelf: input.useShelf, ...input.settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
   const meta = await shopMeta(em, frame, report, { paper: input.paper });
-  const order = orderList(plan.planned, supplier.currency, { cutFee: Number(supplier.cutFee) });
+  const order = orderList(plan.planned, supplier.currency, { cutFee: Number(supplier.cutFee) }, meta.units);
   const reference = newReference();
   const f = {
     lengthText: (mm: number) => lengthText(mm, meta.units),

@@ -25,6 +25,10 @@ describe('supplier bars for an order', () => {
     ]);
     expect(choice).toContain('4 × 6000 mm at 48');
     expect(choice).toContain('proven');
+    // In an inch workshop the same words in inches: 6000 mm / 25.4 = 236.22 in, 236 1/4 to the sixteenth (NIST: 1 in = 25.4 mm exactly).
+    const inches = explainChoice({ profileId: profile, profileName: 'x', job, plan, considered: j.considered }, { display: 'in', frac: 16 });
+    expect(inches.choice).toContain('4 × 236 1/4" at 48');
+    expect(inches.choice).not.toMatch(/\d mm/);
   });
 
   it('offers one length once, at the cheaper of two quotes', () => {
