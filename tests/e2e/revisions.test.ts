@@ -49,9 +49,12 @@ describe('revisions of a frame: save, name, compare, restore', () => {
     await swapModules(page, /Compressor cooler/, /Sink with tap/);
     await page.getByTestId('what-changed').waitFor();
     await allSaved(page);
+    // The status can read "saved" before the swap's first save starts: wait for the version it makes.
+    const firstVersion = async () => Number((await versions(page).first().locator('td').nth(1).innerText()).match(/\d+/)?.[0] ?? 0);
+    await expect.poll(firstVersion, { timeout: 20_000 }).toBeGreaterThan(named);
     await expect.poll(async () => versions(page).first().innerText()).toContain('Current');
-    const current = Number((await versions(page).first().locator('td').nth(1).innerText()).match(/\d+/)![0]);
-    expect(current).toBeGreaterThan(named);
+    await allSaved(page);
+    const current = await firstVersion();
     // The swap's saves and the drawing's saves are not each a revision: the list is the created frame, the named
     // revision and the current one.
     expect(await versions(page).count()).toBe(3);
