@@ -4,7 +4,7 @@ import { computeReport, type FrameReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { demoFrameDocument } from '@shared/model/demo-frame';
 import { screenshotPath } from './support/browser';
-import { cutListRows, fieldValue, itemInView, toScreen, useScratchFrame } from './editor-helpers';
+import { cutListRows, dragAcrossOpening, fieldValue, itemInView, useScratchFrame } from './editor-helpers';
 
 describe('drawing in the frame editor', () => {
   let page: Page;
@@ -26,12 +26,7 @@ describe('drawing in the frame editor', () => {
 
     await page.getByRole('button', { name: /^Draw/ }).click();
     // Start and finish a little inside the opening: the ends snap to the uprights' faces.
-    const a = await toScreen(page, 'front', left.x1 + 4, z);
-    const b = await toScreen(page, 'front', right.x0 - 4, z);
-    await page.mouse.move(a.x, a.y);
-    await page.mouse.down();
-    for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
-    await page.mouse.up();
+    await dragAcrossOpening(page, left, right, z);
 
     await expect.poll(() => page.getByTestId('part-cut-length').innerText()).toBe(formatLength(expected, 'mm'));
     await page.screenshot({ path: screenshotPath('editor-draw-rail.png') });

@@ -139,13 +139,21 @@ export async function drawRailBetween(page: Page, report: FrameReport, leftId: s
   const left = itemInView(report, 'front', leftId);
   const right = itemInView(report, 'front', rightId);
   await page.getByRole('button', { name: 'Draw', exact: true }).click();
+  await dragAcrossOpening(page, left, right, z);
+  await page.getByRole('button', { name: 'Pick', exact: true }).click();
+}
+
+/**
+ * With the Draw tool on, drags along the front view from just inside the left item's face to just inside the right
+ * one's at height `z`, so the new member's ends snap to those faces.
+ */
+export async function dragAcrossOpening(page: Page, left: { x1: number }, right: { x0: number }, z: number): Promise<void> {
   const a = await toScreen(page, 'front', left.x1 + 4, z);
   const b = await toScreen(page, 'front', right.x0 - 4, z);
   await page.mouse.move(a.x, a.y);
   await page.mouse.down();
   for (let k = 1; k <= 10; k++) await page.mouse.move(a.x + ((b.x - a.x) * k) / 10, a.y);
   await page.mouse.up();
-  await page.getByRole('button', { name: 'Pick', exact: true }).click();
 }
 
 /** Swaps two modules as a builder does: pick one in the Modules list, Shift-click the other, press S. */

@@ -83,7 +83,8 @@ describe('revisions of a frame: save, name, compare, restore', () => {
     expect(await versions(page).count()).toBe(4);
     expect(await versions(page).first().innerText()).toContain('Current');
     await allSaved(page);
-    expect(await cutListRows(page)).toEqual(drawnCutList);
+    // The restored document reaches the editor and its report after the list: wait for its cut list.
+    await expect.poll(() => cutListRows(page), { timeout: 20_000 }).toEqual(drawnCutList);
     await page.screenshot({ path: screenshotPath('revisions-restored.png'), fullPage: true });
   });
 });
