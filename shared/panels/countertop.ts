@@ -42,8 +42,8 @@ export function countertop(input: CountertopInput): Countertop {
   if (cutout.x_mm < 0 || cutout.y_mm < 0 || cutout.x_mm + cutout.length_mm > length || cutout.y_mm + cutout.width_mm > width) {
     throw new InputError('sink', 'sink: the cut-out runs past the countertop’s edge');
   }
-  const notes = ['cut the sink opening from a drilled start hole with a jigsaw; seal its edges against water'];
+  const notes = ['Cut the sink opening from a drilled start hole with a jigsaw (eye and hearing protection, the top clamped down); seal its edges against water.'];
   const web = Math.min(cutout.y_mm, width - cutout.y_mm - cutout.width_mm);
-  if (web < 50) notes.push(`only ${Math.round(web)} mm of top left in front of or behind the sink: it may crack there`);
+  if (web < 50) notes.push(`Only ${Math.round(web)} mm of top left in front of or behind the sink: it may crack there.`);
   return { part, cutout, notes };
 }
