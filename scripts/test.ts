@@ -11,7 +11,25 @@ import { aptInstall, runAsync } from './lib/run.ts';
 
 const outDir = join(projectRoot, 'test-output');
 mkdirSync(outDir, { recursive: true });
-const results: { stage: string; ok: boolean; passed?: number; failed?: number }[] = [];
+const results: { stage: string; ok: boolean; passed?: number; failed?: number; failures?: string[] }[] = [];
+
+type VitestJson = {
+  numPassedTests: number;
+  numFailedTests: number;
+  testResults: { name: string; assertionResults: { status: string; fullName: string; failureMessages?: string[] }[] }[];
+};
+
+/** "file › test: first line of the message", so the summary at the end of a long log names what failed. */
+function failuresOf(json: VitestJson): string[] {
+  return json.testResults.flatMap((f) =>
+    f.assertionResults
+      .filter((a) => a.status === 'failed')
+      .map((a) => {
+        const first = (a.failureMessages?.[0] ?? '').split('\n')[0].slice(0, 300);
+        return `${f.name.replace(`${projectRoot}/`, '')} › ${a.fullName}: ${first}`;
+      }),
+  );
+}
 const vitest = join(projectRoot, 'node_modules/vitest/vitest.mjs');
 
 async function vitestProject(project: string, env: NodeJS.ProcessEnv): Promise<void> {
@@ -23,12 +41,14 @@ async function vitestProject(project: string, env: NodeJS.ProcessEnv): Promise<v
   );
   let passed: number | undefined;
   let failed: number | undefined;
+  let failures: string[] | undefined;
   if (existsSync(report)) {
-    const json = JSON.parse(readFileSync(report, 'utf8')) as { numPassedTests: number; numFailedTests: number };
+    const json = JSON.parse(readFileSync(report, 'utf8')) as VitestJson;
     passed = json.numPassedTests;
     failed = json.numFailedTests;
+    failures = failuresOf(json);
   }
-  results.push({ stage: `${project} tests`, ok: code === 0, passed, failed });
+  results.push({ stage: `${project} tests`, ok: code === 0, passed, failed, failures });
 }
 
 async function stage(name: string, fn: () => Promise<void> | void): Promise<void> {
@@ -87,6 +107,7 @@ console.log('\n=== summary');
 for (const r of results) {
   const counts = r.passed === undefined ? '' : ` (${r.passed} passed, ${r.failed} failed)`;
   console.log(`${r.ok ? 'ok  ' : 'FAIL'} ${r.stage}${counts}`);
+  for (const f of r.failures ?? []) console.log(`       ✗ ${f}`);
 }
 const allOk = results.length > 0 && results.every((r) => r.ok);
 console.log(`\nnpm test: ${passed} passed, ${failed} failed`);

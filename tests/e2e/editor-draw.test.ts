@@ -63,8 +63,10 @@ describe('drawing in the frame editor', () => {
     await page.locator('[data-view="front"]').focus();
     await page.keyboard.press('Control+z'); // the length
     await page.keyboard.press('Control+z'); // the rail
-    const after = await cutListRows(page);
-    expect(after.reduce((n, r) => n + Number(r[3]), 0)).toBe(count - 1);
+    // The cut list follows the document a moment after the key: poll it rather than read it once.
+    await expect
+      .poll(async () => (await cutListRows(page)).reduce((n, r) => n + Number(r[3]), 0))
+      .toBe(count - 1);
     expect(count - 1).toBe(report.members.length);
   });
 });

@@ -62,11 +62,15 @@ describe('swapping modules re-lays the frame', () => {
     await expect.poll(() => fieldValue(page, 'part-position-x')).toBe(formatLength(moved, 'mm'));
 
     // The drawn rail now spans the tank's narrower bay: one part fewer at the cooler bay's width, one more at the tank's.
-    const rowsAfter = await cutListRows(page);
+    // The cut list table follows the report when the page has a moment: poll it.
     const wide = formatLength(coolerBay.width_mm, 'mm');
     const narrow = formatLength(tankBay.width_mm, 'mm');
-    expect(qtyOf(rowsAfter, wide)).toBe(qtyOf(rowsBefore, wide) - 1);
-    expect(qtyOf(rowsAfter, narrow)).toBe(qtyOf(rowsBefore, narrow) + 1);
+    await expect
+      .poll(async () => {
+        const rowsAfter = await cutListRows(page);
+        return [qtyOf(rowsAfter, wide), qtyOf(rowsAfter, narrow)];
+      })
+      .toEqual([qtyOf(rowsBefore, wide) - 1, qtyOf(rowsBefore, narrow) + 1]);
 
     // Undo: the bays, the upright and the cut list are as before.
     await page.locator('[data-view="front"]').focus();
