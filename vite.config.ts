@@ -28,6 +28,7 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/shared/**/*.test.ts', 'tests/scripts/**/*.test.ts', 'tests/src/**/*.test.ts'],
           environment: 'node',
+          setupFiles: ['tests/support/fast-check-seed.ts'],
           // Property tests run hundreds of random frames and the command-line tests start processes: on a busy
           // machine they take longer than the default 5 s without being wrong.
           testTimeout: 60000,
@@ -39,6 +40,7 @@ export default defineConfig({
           name: 'api',
           include: ['tests/server/**/*.test.ts'],
           globalSetup: ['tests/support/api-global-setup.ts'],
+          setupFiles: ['tests/support/fast-check-seed.ts'],
           environment: 'node',
           fileParallelism: false,
           testTimeout: 20000,

@@ -39,6 +39,18 @@ const round = (v: number, digits: number): number => {
   const r = Math.round(v * f) / f;
   return Object.is(r, -0) ? 0 : r;
 };
+/** Rounded away from zero, so a reported load, deflection or utilisation is never below the one worked out (loads err on the safe side). */
+const roundOut = (v: number, digits: number): number => {
+  const f = 10 ** digits;
+  const r = (Math.sign(v) * Math.ceil(Math.abs(v) * f - 1e-7)) / f;
+  return Object.is(r, -0) ? 0 : r;
+};
+/** Rounded toward zero, for what a member can take: a reported capacity is never above the one worked out. */
+const roundIn = (v: number, digits: number): number => {
+  const f = 10 ** digits;
+  const r = (Math.sign(v) * Math.floor(Math.abs(v) * f + 1e-7)) / f;
+  return Object.is(r, -0) ? 0 : r;
+};
 const mm = (v: number) => round(v, 4);
 const vec = (v: Vec3, d = 4): Vec3 => ({ x: round(v.x, d), y: round(v.y, d), z: round(v.z, d) });
 const boxMin = (b: Box): Vec3 => vec({ x: b.min[0], y: b.min[1], z: b.min[2] });
@@ -161,7 +173,7 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
   const checks = loads.checks.map((c) => ({
     member_id: idOf(c.member),
     mark: cuts.markOf[c.member],
-    load_N: round(c.load_N, 3),
+    load_N: roundOut(c.load_N, 3),
     bending_axis: c.bending_axis,
     I_mm4: round(c.I_mm4, 1),
     W_mm3: round(c.W_mm3, 1),
@@ -171,37 +183,37 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       to_mm: mm(s.to_mm),
       span_mm: mm(s.span_mm),
       support: s.support,
-      deflection_mm: round(s.deflection_mm, 5),
-      deflection_fixed_mm: s.deflection_fixed_mm === null ? null : round(s.deflection_fixed_mm, 5),
-      limit_mm: round(s.limit_mm, 4),
-      moment_Nmm: round(s.moment_Nmm, 1),
-      moment_fixed_Nmm: s.moment_fixed_Nmm === null ? null : round(s.moment_fixed_Nmm, 1),
+      deflection_mm: roundOut(s.deflection_mm, 5),
+      deflection_fixed_mm: s.deflection_fixed_mm === null ? null : roundOut(s.deflection_fixed_mm, 5),
+      limit_mm: roundIn(s.limit_mm, 4),
+      moment_Nmm: roundOut(s.moment_Nmm, 1),
+      moment_fixed_Nmm: s.moment_fixed_Nmm === null ? null : roundOut(s.moment_fixed_Nmm, 1),
       root: s.root,
-      stress_MPa: round(s.stress_MPa, 4),
-      allowable_MPa: round(s.allowable_MPa, 4),
-      utilisation: round(s.utilisation, 5),
+      stress_MPa: roundOut(s.stress_MPa, 4),
+      allowable_MPa: roundIn(s.allowable_MPa, 4),
+      utilisation: roundOut(s.utilisation, 5),
     })),
-    utilisation: c.utilisation === null ? null : round(c.utilisation, 5),
+    utilisation: c.utilisation === null ? null : roundOut(c.utilisation, 5),
     governing: c.governing,
     governing_case: c.case,
-    self_weight_N: round(c.self_weight_N, 3),
+    self_weight_N: roundOut(c.self_weight_N, 3),
     lateral: c.lateral
       ? {
-          load_N: round(c.lateral.load_N, 3),
+          load_N: roundOut(c.lateral.load_N, 3),
           bending_axis: c.lateral.bending_axis,
-          deflection_mm: round(c.lateral.deflection_mm, 5),
-          stress_MPa: round(c.lateral.stress_MPa, 4),
-          utilisation: round(c.lateral.utilisation, 5),
-          combined_utilisation: round(c.lateral.combined_utilisation, 5),
+          deflection_mm: roundOut(c.lateral.deflection_mm, 5),
+          stress_MPa: roundOut(c.lateral.stress_MPa, 4),
+          utilisation: roundOut(c.lateral.utilisation, 5),
+          combined_utilisation: roundOut(c.lateral.combined_utilisation, 5),
           governing: c.lateral.governing,
         }
       : null,
-    unsymmetric: c.unsymmetric ? { deflection_factor: round(c.unsymmetric.deflection_factor, 5), stress_factor: round(c.unsymmetric.stress_factor, 5) } : null,
+    unsymmetric: c.unsymmetric ? { deflection_factor: roundOut(c.unsymmetric.deflection_factor, 5), stress_factor: roundOut(c.unsymmetric.stress_factor, 5) } : null,
   }));
   const columns = loads.columns.map((c) => ({
     member_id: idOf(c.member),
     mark: cuts.markOf[c.member],
-    axial_N: round(c.axial_N, 3),
+    axial_N: roundOut(c.axial_N, 3),
     governing_case: c.case,
     length_mm: mm(c.length_mm),
     K: c.K,
@@ -212,10 +224,10 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
     buckling_class: c.buckling_class,
     slenderness: round(c.slenderness, 3),
     relative_slenderness: round(c.relative_slenderness, 5),
-    euler_N: round(c.euler_N, 3),
-    chi: round(c.chi, 5),
-    capacity_N: round(c.capacity_N, 3),
-    utilisation: round(c.utilisation, 5),
+    euler_N: roundIn(c.euler_N, 3),
+    chi: roundIn(c.chi, 5),
+    capacity_N: roundIn(c.capacity_N, 3),
+    utilisation: roundOut(c.utilisation, 5),
     source: COLUMN_SOURCE,
   }));
   let governing: { member_id: string; utilisation: number; check: 'beam' | 'column' } | null = null;
@@ -354,14 +366,14 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       safety_factor_note: SAFETY_FACTOR_NOTE,
       modules: loads.modules.map((l) => ({
         module_id: modules[l.module].module.id,
-        weight_N: round(l.weight_N, 3),
-        factored_N: round(l.factored_N, 3),
+        weight_N: roundOut(l.weight_N, 3),
+        factored_N: roundOut(l.factored_N, 3),
         members: l.contacts,
       })),
       members: checks,
       uprights: members
         .filter((g) => g.axis === 'z' && loads.axial_N[g.index] > 1e-9)
-        .map((g) => ({ member_id: g.member.id, axial_N: round(loads.axial_N[g.index], 3) })),
+        .map((g) => ({ member_id: g.member.id, axial_N: roundOut(loads.axial_N[g.index], 3) })),
       max_utilisation: governing?.utilisation ?? null,
       governing_member_id: governing?.member_id ?? null,
       governing_check: governing?.check ?? null,
@@ -369,25 +381,25 @@ export function computeReport(doc: FrameDocument, opts: ReportOptions = {}): Fra
       statics: loads.statics.map((st) => ({
         module_id: modules[st.module].module.id,
         case: st.case,
-        load_N: round(st.load_N, 3),
+        load_N: roundOut(st.load_N, 3),
         at_mm: { x: round(st.at.x, 2), y: round(st.at.y, 2) },
-        reactions: st.reactions.map((r) => ({ member_id: idOf(r.member), R_N: round(r.R_N, 3), x_mm: round(r.x_mm, 2) })),
+        reactions: st.reactions.map((r) => ({ member_id: idOf(r.member), R_N: roundOut(r.R_N, 3), x_mm: round(r.x_mm, 2) })),
         tips_toward: st.tips?.toward ?? null,
       })),
       columns,
       column_K: loads.K,
       fixings: loads.fixings.map((f) => ({
         case: f.case,
-        horizontal_N: round(f.horizontal_N, 3),
-        vertical_N: round(f.vertical_N, 3),
+        horizontal_N: roundOut(f.horizontal_N, 3),
+        vertical_N: roundOut(f.vertical_N, 3),
         points: f.points.map((p) => ({
           member_id: idOf(p.member),
           mark: cuts.markOf[p.member],
           title: titleOf(idOf(p.member)),
           kind: p.kind,
           at_mm: vec(p.at, 2),
-          vertical_N: round(p.vertical_N, 3),
-          horizontal_N: round(p.horizontal_N, 3),
+          vertical_N: roundOut(p.vertical_N, 3),
+          horizontal_N: roundOut(p.horizontal_N, 3),
         })),
       })),
       fixings_caution: FIXINGS_CAUTION,

@@ -200,7 +200,8 @@ describe('supports as they are', () => {
         const sum = all.loads.statics.find((st) => st.case === 'shock')?.reactions.reduce((s, x) => s + x.R_N, 0) as number;
         expect(sum).toBeGreaterThanOrEqual(30 * g - 1e-6);
       }),
-      { numRuns: 15 },
+      // 560, 24, 0 once failed the sum: reactions rounded to the nearest 0.001 N added up to 0.0005 N under the weight.
+      { numRuns: 15, examples: [[560, 24, 0]] },
     );
   }, 120_000);
 
