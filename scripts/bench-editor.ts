@@ -8,14 +8,16 @@
 // for select, drag release, swap and undo, no task over 50 ms during a drag, cold open ≤ 1.5 s; at 2,004 members
 // p95 ≤ 200 ms and cold open ≤ 3 s. The machine's 1-minute load average is printed beside every figure: on a
 // shared machine it moves the figures more than most code changes do.
-// Bounded: about 12 samples of each action per frame size. Flags: --no-build reuses dist/; --quick: 504 only.
+// Two frames at each size: the generated run the speed work was measured on while it was done ("tuned"), and one it
+// never saw ("held out": stacked bays, another depth and width pattern), so a gain that only fits the first shows.
+// Bounded: about 12 samples of each action per frame size. Flags: --no-build reuses dist/; --quick: ~500 members only.
 import { loadavg } from 'node:os';
 import { chromium, type Page } from 'playwright-core';
 import { projectBox, VIEWS } from '@shared/editing/views';
 import { computeReport, type FrameReport } from '@shared/engine/report';
 import type { FrameDocument } from '@shared/model/frame-document';
 import { buildClient, prepareDatabase, startServer, stopProcess, waitForHealth } from './lib/app-env';
-import { benchFrame } from './lib/bench-frame';
+import { benchFrame, heldOutFrame } from './lib/bench-frame';
 import { quantile } from './lib/stats';
 
 const PORT = Number(process.env.BENCH_PORT ?? 3921);
@@ -85,6 +87,8 @@ function push(s: Sample, v: number): void {
 }
 
 type SizeResult = {
+  /** "tuned" for the frame the editor's speed work was measured on while it was done, "held out" for the other. */
+  set: string;
   members: number;
   coldOpen: Sample;
   coldTask: Sample;
@@ -151,10 +155,10 @@ async function screenPoint(page: Page, report: FrameReport, id: string, dv = 0):
 const POINTER = ['pointerdown', 'pointerup', 'mousedown', 'mouseup', 'click'] as const;
 const KEYS = ['keydown', 'keyup', 'keypress'] as const;
 
-async function measureSize(page: Page, bays: number, reps: number): Promise<SizeResult> {
-  const doc = benchFrame(bays);
+async function measureSize(page: Page, doc: FrameDocument, set: string, reps: number): Promise<SizeResult> {
   const report = computeReport(doc);
   const r: SizeResult = {
+    set,
     members: doc.members.length,
     coldOpen: sample(),
     coldTask: sample(),
@@ -225,7 +229,7 @@ async function measureSize(page: Page, bays: number, reps: number): Promise<Size
   // Swap a module with the next bay's and back, from the keyboard.
   await page.keyboard.press('Escape');
   await page.getByRole('tab', { name: 'Modules' }).click();
-  await page.getByRole('list', { name: 'Modules in this frame' }).getByRole('button', { name: new RegExp(`^(Cooler|Drawers) ${mid}\\b`) }).first().click();
+  await page.getByRole('list', { name: 'Modules in this frame' }).getByRole('button', { name: new RegExp(`^(Cooler|Drawers|Tank) ${mid}\\b`) }).first().click();
   await settle(page);
   for (let k = 0; k < reps; k++) {
     await page.locator('[data-view="front"]').focus();
@@ -254,7 +258,7 @@ function table(r: SizeResult): string {
   const lat = large ? 200 : 100;
   const open = large ? 3000 : 1500;
   return [
-    `\n${r.members} members (input → next paint from Event Timing; tasks from the long-task API)`,
+    `\n${r.members} members, ${r.set} frame (input → next paint from Event Timing; tasks from the long-task API)`,
     `| ${'action'.padEnd(28)} |  n |   median |      p95 |    worst | load        | budget            |`,
     `|${'-'.repeat(30)}|----|----------|----------|----------|-------------|-------------------|`,
     row('select a member', r.select, lat, 'p95'),
@@ -264,6 +268,7 @@ function table(r: SizeResult): string {
     row('longest task during a drag', r.dragTask, large ? null : 50, 'max'),
     row('cold open to the drawn frame', r.coldOpen, open, 'max'),
     row('longest task of the cold open', r.coldTask, null, 'max'),
+    `samples in the order taken (ms): select ${r.select.values.map(Math.round).join(' ')}; release ${r.release.values.map(Math.round).join(' ')}; swap ${r.swap.values.map(Math.round).join(' ')}; undo ${r.undo.values.map(Math.round).join(' ')}`,
     `secondary: rAF interval during the drags median ${med(r.rafMedian).toFixed(1)} ms, worst ${worst(r.rafWorst).toFixed(1)} ms (headless Chromium caps rAF at 60 Hz)`,
   ].join('\n');
 }
@@ -289,8 +294,12 @@ async function main(): Promise<void> {
     page.setDefaultTimeout(60_000);
     await signIn(page);
     const results: SizeResult[] = [];
-    results.push(await measureSize(page, 50, 12));
-    if (!quick) results.push(await measureSize(page, 200, 8));
+    results.push(await measureSize(page, benchFrame(50), 'tuned', 12));
+    results.push(await measureSize(page, heldOutFrame(38), 'held-out', 12));
+    if (!quick) {
+      results.push(await measureSize(page, benchFrame(200), 'tuned', 8));
+      results.push(await measureSize(page, heldOutFrame(150), 'held-out', 8));
+    }
     console.log(`\nFrame editor in headless Chromium ${browser.version()}, ${new Date().toISOString()}`);
     for (const r of results) console.log(table(r));
   } finally {

@@ -33,14 +33,13 @@ async function record(context: BrowserContext, visit: () => Promise<void>): Prom
         const file = join(DIST, decodeURIComponent(url.pathname === '/' ? '/index.html' : url.pathname));
         if (!existsSync(file) || statSync(file).isDirectory()) return null;
         const sizes = await r.request().sizes().catch(() => null);
-        return {
-          url: url.pathname,
-          type: r.request().resourceType(),
-          raw: statSync(file).size,
-          gzip: gzipSize(file),
-          wire: sizes?.responseBodySize ?? NaN,
-          encoding: (await r.headerValue('content-encoding')) ?? 'none',
-        };
+        const encoding = (await r.headerValue('content-encoding')) ?? 'none';
+        const raw = statSync(file).size;
+        // A Web Worker's script is fetched outside the page, and the browser reports no body size for it: the
+        // server sends the build's precompressed copy as it is, so that copy's size is what went over the wire.
+        const copy = encoding === 'br' ? `${file}.br` : encoding === 'gzip' ? `${file}.gz` : file;
+        const wire = sizes?.responseBodySize || (existsSync(copy) ? statSync(copy).size : raw);
+        return { url: url.pathname, type: r.request().resourceType(), raw, gzip: gzipSize(file), wire, encoding };
       })(),
     );
   };

@@ -46,3 +46,49 @@ export function benchFrame(bays = 50): FrameDocument {
   return doc;
 }
 
+
+/**
+ * A frame the editor's performance work was not tuned on, to report beside the tuned one: bays that stack two or
+ * three modules (a drawer over a cooler, a shelf over a tank, two drawers under a hung sink) on a shallower, lower
+ * run, with widths in another pattern. Bottom modules are named "Cooler k", "Drawers k" or "Tank k", the form the benchmark picks them by.
+ */
+export function heldOutFrame(bays = 16): FrameDocument {
+  const list: CabinetBay[] = [];
+  for (let k = 0; k < bays; k++) {
+    const w = 320 + ((k * 53) % 180);
+    const kind = k % 3;
+    if (kind === 0) {
+      list.push({
+        id: `bay-${k}`,
+        module: { id: `module-${k}`, name: `Cooler ${k}`, kind: 'appliance', bearing: 'base', size: { w_mm: w, d_mm: 460, h_mm: 400 }, mass_kg: 14, contents_kg: 16 },
+        stack: [{ id: `top-${k}`, name: `Drawer over cooler ${k}`, kind: 'drawer-stack', bearing: 'side-rails', size: { w_mm: w, d_mm: 440, h_mm: 130 }, mass_kg: 4, contents_kg: 6 }],
+      });
+    } else if (kind === 1) {
+      list.push({
+        id: `bay-${k}`,
+        clearance_mm: 12.7,
+        module: { id: `module-${k}`, name: `Drawers ${k}`, kind: 'drawer-stack', bearing: 'side-rails', size: { w_mm: w, d_mm: 440, h_mm: 200 }, mass_kg: 6, contents_kg: 12, raise_mm: 20 },
+        stack: [
+          { id: `mid-${k}`, name: `Cutlery drawer ${k}`, kind: 'drawer-stack', bearing: 'side-rails', size: { w_mm: w, d_mm: 440, h_mm: 110 }, mass_kg: 3, contents_kg: 4 },
+          { id: `sink-${k}`, name: `Sink ${k}`, kind: 'sink', bearing: 'hung', size: { w_mm: Math.min(w, 380), d_mm: 340, h_mm: 170 }, mass_kg: 6 },
+        ],
+      });
+    } else {
+      list.push({
+        id: `bay-${k}`,
+        module: { id: `module-${k}`, name: `Tank ${k}`, kind: 'tank', bearing: 'base', size: { w_mm: w, d_mm: 420, h_mm: 280 }, mass_kg: 3, litres: 30 },
+        stack: [{ id: `shelf-${k}`, name: `Shelf ${k}`, kind: 'shelf', bearing: 'base', size: { w_mm: w, d_mm: 420, h_mm: 18 }, mass_kg: 2, contents_kg: 8 }],
+      });
+    }
+  }
+  const runs = Math.ceil(bays / MAX_BAYS);
+  const per = Math.ceil(bays / runs);
+  const spec = (k: number): CabinetSpec => ({ name: 'Held-out run', profile: '40x40-s8', depth_mm: 520, height_mm: 860, seat_mm: 100, clearance_mm: 10, bays: list.slice(k * per, (k + 1) * per) });
+  let doc = buildCabinetRun(spec(0));
+  for (let k = 1; k < runs; k++) {
+    const added = addCabinetRun(doc, spec(k), { x: 0, y: k * 700, z: 0 });
+    if (!added.ok) throw new Error(`held-out frame: ${added.reason}`);
+    doc = added.doc;
+  }
+  return doc;
+}

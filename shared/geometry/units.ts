@@ -67,12 +67,21 @@ export function parseForcePerLength(text: string, field = 'load', opts: ParseOpt
 }
 
 /** Whether the reader's locale writes decimals with a comma (1,5), from Intl's own number format. */
+// Making a number format costs about a millisecond, and the editor's fields ask on every mount.
+const decimalCommaByLocale = new Map<string, boolean>();
+
 export function localeUsesDecimalComma(locale?: string): boolean {
+  const key = locale ?? '';
+  const known = decimalCommaByLocale.get(key);
+  if (known !== undefined) return known;
+  let comma = false;
   try {
-    return new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value === ',';
+    comma = new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value === ',';
   } catch {
-    return false;
+    comma = false;
   }
+  if (decimalCommaByLocale.size < 64) decimalCommaByLocale.set(key, comma);
+  return comma;
 }
 
 export const mmToInches = (mm: number): number => mm / MM_PER_INCH;
