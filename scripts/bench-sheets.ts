@@ -74,14 +74,14 @@ console.log('ratios are means per job of sheets / bound; "vs best LB" uses our s
 for (const set of ['tuning', 'held-out'] as const) {
   console.log(`\n${set}`);
   console.log(`${pad('class', 8)}${pad('jobs', 6)}${pad('ours/area', 11)}${pad('ours/LB', 9)}${pad('MaxRects/area', 15)}${pad('shelf/area', 12)}${pad('ours med ms', 13)}${pad('MR med ms', 11)}worse than MR`);
-  const classRatios: { ours: number; mr: number; shelf: number }[] = [];
+  const classRatios: { ours: number; oursLb: number; mr: number; shelf: number }[] = [];
   for (const cls of [...CLASSES, 'galley']) {
     const rs = rows.filter((r) => r.cls === cls && r.set === set);
     if (!rs.length) continue;
     const ours = mean(rs.map((r) => r.sheets / r.area));
     const mr = mean(rs.map((r) => r.mr / r.area));
     const shelf = mean(rs.map((r) => r.shelf / r.area));
-    if (cls !== 'galley') classRatios.push({ ours, mr, shelf });
+    if (cls !== 'galley') classRatios.push({ ours, oursLb: mean(rs.map((r) => r.sheets / r.lb)), mr, shelf });
     const worse = rs.filter((r) => r.sheets > r.mr).length;
     console.log(
       `${pad(cls, 8)}${pad(String(rs.length), 6)}${pad(ours.toFixed(3), 11)}${pad(mean(rs.map((r) => r.sheets / r.lb)).toFixed(3), 9)}${pad(mr.toFixed(3), 15)}${pad(shelf.toFixed(3), 12)}${pad(median(rs.map((r) => r.ms)).toFixed(0), 13)}${pad(median(rs.map((r) => r.mrMs)).toFixed(1), 11)}${worse}`,
@@ -89,7 +89,7 @@ for (const set of ['tuning', 'held-out'] as const) {
   }
   const all = rows.filter((r) => r.set === set);
   console.log(
-    `classes I–X mean of class means: ours/area ${mean(classRatios.map((c) => c.ours)).toFixed(3)}, MaxRects/area ${mean(classRatios.map((c) => c.mr)).toFixed(3)}, shelf/area ${mean(classRatios.map((c) => c.shelf)).toFixed(3)}; ` +
+    `classes I–X mean of class means: ours/area ${mean(classRatios.map((c) => c.ours)).toFixed(3)}, ours/LB ${mean(classRatios.map((c) => c.oursLb)).toFixed(3)}, MaxRects/area ${mean(classRatios.map((c) => c.mr)).toFixed(3)}, shelf/area ${mean(classRatios.map((c) => c.shelf)).toFixed(3)}; ` +
       `sheets in all: ours ${all.reduce((a, r) => a + r.sheets, 0)}, MaxRects ${all.reduce((a, r) => a + r.mr, 0)}, shelf ${all.reduce((a, r) => a + r.shelf, 0)}; median ${median(all.map((r) => r.ms)).toFixed(0)} ms, max ${Math.max(...all.map((r) => r.ms)).toFixed(0)} ms a job`,
   );
 }
