@@ -30,7 +30,7 @@ function emptied(job: SheetJob): { before: number; plan: SheetPlan } {
 const jobArb = fc.record({
   kerf: fc.constantFrom(0, 3),
   trim: fc.constantFrom(0, 10),
-  sheets: fc.constant([{ length: 1200, width: 800 }]),
+  sheets: fc.constant([{ length: 1200, width: 800 }] as { length: number; width: number }[]),
   parts: fc.array(fc.record({ length: fc.integer({ min: 30, max: 700 }), width: fc.integer({ min: 30, max: 500 }), qty: fc.integer({ min: 1, max: 3 }), label: fc.constantFrom('A', 'B', 'C'), grain: fc.boolean() }), { minLength: 3, maxLength: 12 }),
 });
 
