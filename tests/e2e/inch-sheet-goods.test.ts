@@ -54,4 +54,21 @@ describe('sheet goods in an inch and pound workshop', () => {
     await page.getByTestId('plan-sheets').scrollIntoViewIfNeeded();
     await page.screenshot({ path: screenshotPath('inch-sheet-goods-sheets.png') });
   });
+
+  it('a metric sheet typed in an inch frame is kept as typed, and 8 × 4 ft is offered rather than put in its place', async () => {
+    for (const [id, text] of [['sheet-length', '2440 mm'], ['sheet-width', '1220 mm']] as const) {
+      const input = page.getByTestId(id).locator('input');
+      await input.fill(text);
+      await input.press('Enter');
+    }
+    const offer = page.getByTestId('use-usual-sheet');
+    await offer.waitFor();
+    // 2440 mm = 96.06 in → 96 1/16" to the sixteenth.
+    expect(await page.getByTestId('sheet-length').locator('input').inputValue()).toBe('96 1/16"');
+    await page.screenshot({ path: screenshotPath('inch-sheet-goods-offer.png') });
+    await offer.click();
+    await expect.poll(async () => page.getByTestId('sheet-length').locator('input').inputValue()).toBe('96"');
+    expect(await page.getByTestId('sheet-width').locator('input').inputValue()).toBe('48"');
+    expect(await offer.count()).toBe(0);
+  });
 });
