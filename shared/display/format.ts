@@ -1,4 +1,4 @@
-import { formatLength } from '../geometry/units';
+import { formatLength, KG_M3_PER_LB_FT3, KG_PER_LB, type DensityUnit } from '../geometry/units';
 import type { DateFormat } from '../model/settings';
 
 // The one writer of figures for people: lengths, masses and dates as the workshop or the frame chose to read them.
@@ -12,8 +12,7 @@ export type Readout = {
   date?: DateFormat;
 };
 
-/** The avoirdupois pound, exactly 0.45359237 kg (international yard and pound agreement, 1959; NIST SP 811 B.8). */
-export const KG_PER_LB = 0.45359237;
+export { KG_PER_LB };
 
 /** "749.3 mm" (nearest 0.1 mm) or `29 1/2"` (nearest 1/16 or 1/32 inch). */
 export const lengthText = (mm: number, r: Readout): string => formatLength(mm, r.display, r.frac);
@@ -38,6 +37,15 @@ export function massText(kg: number, r: Pick<Readout, 'mass'>): string {
 export function massPerLengthText(kgPerM: number, r: Pick<Readout, 'mass'>): string {
   if (r.mass !== 'lb') return `${round(kgPerM, 2)} kg/m`;
   return `${round((kgPerM / KG_PER_LB) * 0.3048, 2)} lb/ft`;
+}
+
+/** Where masses read in pounds, densities read in lb/ft³; otherwise kg/m³. */
+export const densityUnit = (r: Pick<Readout, 'mass'>): DensityUnit => (r.mass === 'lb' ? 'lb/ft3' : 'kg/m3');
+
+/** "680 kg/m³" (nearest 1) or "42.5 lb/ft³" (nearest 0.1), the resolution a weighed sheet gives. */
+export function densityText(kgPerM3: number, r: Pick<Readout, 'mass'>): string {
+  if (r.mass !== 'lb') return `${round(kgPerM3, 0)} kg/m³`;
+  return `${round(kgPerM3 / KG_M3_PER_LB_FT3, 1)} lb/ft³`;
 }
 
 const pad = (n: number): string => String(n).padStart(2, '0');

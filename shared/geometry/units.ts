@@ -1,3 +1,4 @@
+import { InputError } from '../errors';
 import { parseQuantity, type ParseOptions, type QuantityKind } from './quantity-parser';
 
 /** Exactly 25.4 mm to the inch (NIST; US Federal Register notice of 1 July 1959). */
@@ -28,7 +29,14 @@ const FORCE: QuantityKind = {
   alternatives: [{ dim: [0, 1, 0], factor: STANDARD_GRAVITY }],
   bareFactor: 1,
 };
-const MASS: QuantityKind = { noun: 'a mass', examples: '"25 kg", "55 lb"', dim: [0, 1, 0], bareFactor: 1 };
+/** The avoirdupois pound, exactly 0.45359237 kg (international yard and pound agreement, 1959; NIST SP 811 B.8). */
+export const KG_PER_LB = 0.45359237;
+const MASS = (bare: 'kg' | 'lb'): QuantityKind => ({
+  noun: 'a mass',
+  examples: bare === 'lb' ? '"55 lb", "25 kg"' : '"25 kg", "55 lb"',
+  dim: [0, 1, 0],
+  bareFactor: bare === 'lb' ? KG_PER_LB : 1,
+});
 const FORCE_PER_LENGTH: QuantityKind = {
   noun: 'a load per length',
   examples: '"2 N/mm", "10 lbf/in", "100 N/m"',
@@ -53,9 +61,53 @@ export function parseForce(text: string, field = 'force', opts: ParseOptions = {
   return parseQuantity(text, field, FORCE, opts);
 }
 
-/** A mass in kilograms. A bare number is kilograms; "lb" is the pound mass (0.45359237 kg). */
-export function parseMass(text: string, field = 'mass', opts: ParseOptions = {}): number {
-  return parseQuantity(text, field, MASS, opts);
+export type MassOptions = ParseOptions & {
+  /** What a bare number is: kilograms (the default) or pounds, the unit on screen. */
+  bare?: 'kg' | 'lb';
+};
+
+/** A mass in kilograms. A bare number is in `opts.bare` (kilograms unless told); "lb" is the pound mass (0.45359237 kg). */
+export function parseMass(text: string, field = 'mass', opts: MassOptions = {}): number {
+  return parseQuantity(text, field, MASS(opts.bare ?? 'kg'), opts);
+}
+
+/**
+ * 1 lb/ft³ in kg/m³: 0.45359237 kg / (0.3048 m)³ = 16.018463… kg/m³, exact from the definitions of the pound and
+ * the foot (international yard and pound agreement, 1959).
+ */
+export const KG_M3_PER_LB_FT3 = KG_PER_LB / 0.3048 ** 3;
+
+export type DensityUnit = 'kg/m3' | 'lb/ft3';
+export type DensityOptions = ParseOptions & {
+  /** What a bare number is: kg/m³ (the default) or lb/ft³, the unit on screen. */
+  bare?: DensityUnit;
+};
+
+// The parser has no powers, so a density's unit is read off the end as a whole; what stands before it is a number
+// (or a sum of them).
+const DENSITY_UNITS: [RegExp, number][] = [
+  [/kg\s*\/\s*m(?:³|\^?3)$/i, 1],
+  [/(?<![a-z])g\s*\/\s*cm(?:³|\^?3)$/i, 1000],
+  [/(?:lbs?|pounds?)\s*\/\s*(?:ft|foot)(?:³|\^?3)$/i, KG_M3_PER_LB_FT3],
+  [/(?<![a-z])pcf$/i, KG_M3_PER_LB_FT3],
+];
+
+/** A density in kg/m³: "680", "680 kg/m³", "42.5 lb/ft3", "0.68 g/cm³"; a bare number is in `opts.bare`. */
+export function parseDensity(text: string, field = 'density', opts: DensityOptions = {}): number {
+  const bare = opts.bare ?? 'kg/m3';
+  const kind: QuantityKind = {
+    noun: 'a density',
+    examples: bare === 'lb/ft3' ? '"42.5 lb/ft³", "680 kg/m³"' : '"680 kg/m³", "42.5 lb/ft³"',
+    dim: [0, 0, 0],
+    bareFactor: 1,
+  };
+  const t = typeof text === 'string' ? text.trim() : text;
+  const unit = typeof t === 'string' ? DENSITY_UNITS.find(([re]) => re.test(t)) : undefined;
+  const number = unit ? t.replace(unit[0], '') : t;
+  const factor = unit ? unit[1] : bare === 'lb/ft3' ? KG_M3_PER_LB_FT3 : 1;
+  if (unit && number.trim() === '') throw new InputError(field, `${field}: "${t}" has a unit but no number; expected ${kind.noun} such as ${kind.examples}`);
+  const v = parseQuantity(number, field, kind, opts) * factor;
+  return Math.round(v * 1e9) / 1e9;
 }
 
 /**

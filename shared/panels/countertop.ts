@@ -20,7 +20,8 @@ export type CountertopInput = z.input<typeof countertopInputSchema>;
 
 export type Countertop = { part: SheetPart; cutout: { x_mm: number; y_mm: number; length_mm: number; width_mm: number } | null; notes: string[] };
 
-export function countertop(input: CountertopInput): Countertop {
+/** `text` writes the lengths in the notes, in the builder's unit (mm unless told). */
+export function countertop(input: CountertopInput, text: (mm: number) => string = (v) => `${Math.round(v)} mm`): Countertop {
   const parsed = countertopInputSchema.safeParse(input);
   if (!parsed.success) {
     const field = parsed.error.issues[0].path.map(String).join('.') || 'countertop';
@@ -44,6 +45,6 @@ export function countertop(input: CountertopInput): Countertop {
   }
   const notes = ['Cut the sink opening from a drilled start hole with a jigsaw (eye and hearing protection, the top clamped down); seal its edges against water.'];
   const web = Math.min(cutout.y_mm, width - cutout.y_mm - cutout.width_mm);
-  if (web < 50) notes.push(`Only ${Math.round(web)} mm of top left in front of or behind the sink: it may crack there.`);
+  if (web < 50) notes.push(`Only ${text(web)} of top left in front of or behind the sink: it may crack there.`);
   return { part, cutout, notes };
 }

@@ -36,7 +36,7 @@ export type DrawerBox = {
   hardware: HardwareLine[];
 };
 
-const fmt = (v: number): string => `${Number(v.toFixed(2))} mm`;
+const mmText = (v: number): string => `${Number(v.toFixed(2))} mm`;
 
 /** Parse with the schema and name the field at fault (a dotted path such as `opening.depth_mm`). */
 export function parseDrawerBoxInput(input: unknown): z.output<typeof drawerBoxInputSchema> {
@@ -49,35 +49,36 @@ export function parseDrawerBoxInput(input: unknown): z.output<typeof drawerBoxIn
   return parsed.data;
 }
 
-export function drawerBox(input: DrawerBoxInput): DrawerBox {
+/** `text` writes the lengths in a refusal, so the editor says them in the builder's unit (mm for the command line). */
+export function drawerBox(input: DrawerBoxInput, text: (mm: number) => string = mmText): DrawerBox {
   const d = parseDrawerBoxInput(input);
   const { slide, opening } = d;
   const t = d.thickness_mm;
   if (slide.maxSideThickness_mm !== null && t > slide.maxSideThickness_mm + 1e-9) {
-    throw new InputError('thickness_mm', `thickness_mm: this slide takes sides up to ${fmt(slide.maxSideThickness_mm)} thick (got ${fmt(t)})`);
+    throw new InputError('thickness_mm', `thickness_mm: this slide takes sides up to ${text(slide.maxSideThickness_mm)} thick (got ${text(t)})`);
   }
   const groove = d.grooveDepth_mm ?? t / 2;
   if (groove > t / 2 + 1e-9) {
-    throw new InputError('grooveDepth_mm', `grooveDepth_mm: at most half the side's thickness, ${fmt(t / 2)} (common practice; got ${fmt(groove)})`);
+    throw new InputError('grooveDepth_mm', `grooveDepth_mm: at most half the side's thickness, ${text(t / 2)} (common practice; got ${text(groove)})`);
   }
   const dado = d.joint === 'dado' ? (d.dadoDepth_mm ?? t / 2) : 0;
-  if (dado > t / 2 + 1e-9) throw new InputError('dadoDepth_mm', `dadoDepth_mm: at most half the side's thickness, ${fmt(t / 2)} (got ${fmt(dado)})`);
+  if (dado > t / 2 + 1e-9) throw new InputError('dadoDepth_mm', `dadoDepth_mm: at most half the side's thickness, ${text(t / 2)} (got ${text(dado)})`);
 
   const length = nominalSlideLength(slide, opening.depth_mm);
   if (length === null) {
     const shortest = Math.min(...slide.lengths_mm);
-    throw new InputError('opening.depth_mm', `opening.depth_mm: ${fmt(opening.depth_mm)} is too shallow for the shortest slide (${fmt(shortest)} + ${fmt(slide.rearClearance_mm)} behind it)`);
+    throw new InputError('opening.depth_mm', `opening.depth_mm: ${text(opening.depth_mm)} is too shallow for the shortest slide (${text(shortest)} + ${text(slide.rearClearance_mm)} behind it)`);
   }
   const width = opening.width_mm - 2 * slide.sideDeduction_mm;
   const height = opening.height_mm - slide.topClearance_mm - slide.bottomClearance_mm;
   const inner = width - 2 * t;
-  if (inner <= 0) throw new InputError('opening.width_mm', `opening.width_mm: ${fmt(opening.width_mm)} leaves no room inside the box after the slides and two ${fmt(t)} sides`);
+  if (inner <= 0) throw new InputError('opening.width_mm', `opening.width_mm: ${text(opening.width_mm)} leaves no room inside the box after the slides and two ${text(t)} sides`);
   const grooveOffset = d.grooveOffset_mm ?? (slide.bottomRecess_mm > 0 ? slide.bottomRecess_mm : 10);
   if (slide.bottomRecess_mm > 0 && grooveOffset + 1e-9 < slide.bottomRecess_mm) {
-    throw new InputError('grooveOffset_mm', `grooveOffset_mm: the bottom must sit at least ${fmt(slide.bottomRecess_mm)} up to hide the slide (got ${fmt(grooveOffset)})`);
+    throw new InputError('grooveOffset_mm', `grooveOffset_mm: the bottom must sit at least ${text(slide.bottomRecess_mm)} up to hide the slide (got ${text(grooveOffset)})`);
   }
   if (height < grooveOffset + d.bottomThickness_mm + 20) {
-    throw new InputError('opening.height_mm', `opening.height_mm: ${fmt(opening.height_mm)} leaves a box ${fmt(height)} high, too low for its bottom ${fmt(grooveOffset)} up`);
+    throw new InputError('opening.height_mm', `opening.height_mm: ${text(opening.height_mm)} leaves a box ${text(height)} high, too low for its bottom ${text(grooveOffset)} up`);
   }
 
   const bottomW = inner + 2 * groove - d.bottomPlay_mm;

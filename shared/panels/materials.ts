@@ -2,11 +2,15 @@
 // not confirmed against a data sheet): every one is editable, and the report says they are typical.
 import { z } from 'zod';
 
+/** Lightest foam board to densest fibre board and beyond, kg/m³: outside these a typed density is a slip. */
+export const DENSITY_MIN_KG_M3 = 50;
+export const DENSITY_MAX_KG_M3 = 3000;
+
 export const sheetMaterialSchema = z.object({
   id: z.string().min(1).max(60),
   name: z.string().min(1).max(120),
   /** kg/m³ */
-  density_kg_m3: z.number().finite().min(50).max(3000),
+  density_kg_m3: z.number().finite().min(DENSITY_MIN_KG_M3).max(DENSITY_MAX_KG_M3),
   thickness_mm: z.number().finite().min(1).max(60),
   /** True while the density is a typical value the builder has not replaced with their sheet's own. */
   typical: z.boolean().default(true),

@@ -4,6 +4,7 @@
 // pipeline, so the editor, the shop documents and the command line can each choose it.
 import { computeReport, type FrameReport, type ReportOptions } from '../engine/report';
 import type { HardwareLine as ReportHardwareLine, HardwareKind } from '../engine/hardware';
+import { massText } from '../display/format';
 import { InputError } from '../errors';
 import type { FrameDocument } from '../model/frame-document';
 import type { HardwareLine } from './parts';
@@ -63,7 +64,7 @@ export function goodsMassByModule(report: FrameReport, goods: SheetGoods): { byM
       notes.push('The countertop and the panels of bays with no module are carried by the modules in the model; the members of bays with no module are not checked for them.');
     }
   } else if (shared > 0) {
-    notes.push(`${Math.round(shared * 10) / 10} kg of panels and countertop sit on bays with no module: counted in the sheet goods’ mass, not in the member checks.`);
+    notes.push(`${massText(shared, report.units)} of panels and countertop sit on bays with no module: counted in the sheet goods’ mass, not in the member checks.`);
   }
   return { byModule, notes };
 }

@@ -3,6 +3,7 @@
 // cut list groups them and the sheet planner nests each material on its own sheets; their mass and centre of
 // gravity join the frame's.
 import type { FrameReport } from '../engine/report-types';
+import { lengthText } from '../display/format';
 import { InputError } from '../errors';
 import type { Vec3 } from '../model/axis';
 import { bayPanel } from './bay-panels';
@@ -78,10 +79,12 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
     parts.push({ ...p, thickness_mm: material.thickness_mm, material, owner, centre_mm: at, mass_kg: p.qty * partMass_kg(p.length_mm, p.width_mm, material.thickness_mm, material.density_kg_m3) });
   };
   const drawers: SheetGoods['drawers'] = [];
+  // Notes are read on screen and paper, so their lengths are in the frame's own unit like every other figure.
+  const text = (mm: number) => lengthText(mm, report.units);
   for (const o of drawerOpenings(report)) {
     let box: DrawerBox;
     try {
-      box = drawerBox({ opening: { width_mm: o.width_mm, height_mm: o.height_mm, depth_mm: o.depth_mm }, slide: opts.slide, joint: opts.joint, thickness_mm: opts.box.thickness_mm, bottomThickness_mm: opts.bottom.thickness_mm, support: o.support });
+      box = drawerBox({ opening: { width_mm: o.width_mm, height_mm: o.height_mm, depth_mm: o.depth_mm }, slide: opts.slide, joint: opts.joint, thickness_mm: opts.box.thickness_mm, bottomThickness_mm: opts.bottom.thickness_mm, support: o.support }, text);
     } catch (err) {
       // One drawer that cannot be sized (too shallow for any slide…) must not hide every other part.
       if (!(err instanceof InputError)) throw err;
@@ -136,7 +139,7 @@ export function sheetGoods(report: FrameReport, opts: SheetGoodsOptions = defaul
         run: { length_mm: max.x - min.x, depth_mm: max.y - min.y },
         thickness_mm: opts.top.thickness_mm,
         ...(sink ? { sink: { x_mm: sink.min_mm.x - min.x, y_mm: sink.min_mm.y - min.y, w_mm: sink.max_mm.x - sink.min_mm.x, d_mm: sink.max_mm.y - sink.min_mm.y } } : {}),
-      });
+      }, text);
       const cut = top.cutout ? top.cutout.length_mm * top.cutout.width_mm : 0;
       add(top.part, opts.top, 'countertop', { x: (min.x + max.x) / 2, y: (min.y + max.y) / 2, z: max.z + opts.top.thickness_mm / 2 });
       boxes.push({ id: 'countertop', kind: 'top', min_mm: { x: min.x, y: max.y - top.part.width_mm, z: max.z }, max_mm: { x: max.x, y: max.y, z: max.z + opts.top.thickness_mm } });

@@ -9,6 +9,22 @@ export type MaterialJob = { materialId: string; material: string; thickness_mm: 
 
 /** Common practice (REFERENCES.md "Sheet goods"): 2440 × 1220 mm sheets, a track-saw kerf of about 3 mm, 10 mm trim. */
 export const DEFAULT_SHEET: SheetStock = { length: 2440, width: 1220 };
+/** The sheet sold where lengths are read in inches: 8 × 4 ft, exactly 2438.4 × 1219.2 mm (1 ft = 304.8 mm exactly). */
+export const DEFAULT_INCH_SHEET: SheetStock = { length: 8 * 304.8, width: 4 * 304.8 };
+
+/** The sheet a builder most likely buys, from the unit they read lengths in. */
+export const defaultSheetFor = (display: 'mm' | 'in'): SheetStock => ({ ...(display === 'in' ? DEFAULT_INCH_SHEET : DEFAULT_SHEET) });
+
+/**
+ * The usual sheet of the frame's unit when the sheet set is the other unit's (a frame that took 2440 × 1220 mm before
+ * it read inches): offered to the builder rather than swapped, since a stored sheet is never changed behind them.
+ */
+export function usualSheetInstead(sheet: SheetStock, display: 'mm' | 'in'): SheetStock | null {
+  const other = display === 'in' ? DEFAULT_SHEET : DEFAULT_INCH_SHEET;
+  const same = (a: number, b: number) => Math.abs(a - b) < 1e-6;
+  if (!same(sheet.length, other.length) || !same(sheet.width, other.width)) return null;
+  return { ...sheet, ...defaultSheetFor(display) };
+}
 export const DEFAULT_SHEET_KERF = 3;
 export const DEFAULT_SHEET_TRIM = 10;
 

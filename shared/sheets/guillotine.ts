@@ -110,6 +110,48 @@ function place(ctx: Ctx, sheet: PackedSheet, f: RegionNode, a: number, c: number
 
 export type NestOptions = { fit: Fit; split: Split };
 
+/** The smallest side of any part: free pieces narrower than this plus a kerf can hold nothing and are dropped. */
+export function smallestSide(items: readonly NestItem[]): number {
+  let minSide = Infinity;
+  for (const it of items) minSide = Math.min(minSide, it.l, it.w);
+  return minSide;
+}
+
+/** The free piece of `s` (and the way round) that a grown a0 × c0 part fits best, or null. */
+function bestFree(s: PackedSheet, it: NestItem, a0: number, c0: number, fit: Fit): { f: RegionNode; a: number; c: number; rot: boolean; score: number } | null {
+  let best: { f: RegionNode; a: number; c: number; rot: boolean; score: number } | null = null;
+  for (const f of s.free) {
+    if (a0 <= f.l + EPS && c0 <= f.w + EPS) {
+      const sc = score(fit, f, a0, c0);
+      if (!best || sc < best.score) best = { f, a: a0, c: c0, rot: false, score: sc };
+    }
+    if (it.rotatable && c0 <= f.l + EPS && a0 <= f.w + EPS) {
+      const sc = score(fit, f, c0, a0);
+      if (!best || sc < best.score) best = { f, a: c0, c: a0, rot: true, score: sc };
+    }
+  }
+  return best;
+}
+
+/**
+ * One sheet of `kind` filled from `items` in the order given: each part into the free piece it fits best, a part
+ * that fits nowhere left for a later sheet. `minSide` is the smallest side among every part still to place.
+ */
+export function fillSheet(items: readonly NestItem[], kind: SheetKind, kerf: number, opts: NestOptions & { minSide: number }): { sheet: PackedSheet; placed: number[] } {
+  const ctx: Ctx = { kerf, minSide: opts.minSide, split: opts.split };
+  const root: RegionNode = { x: kind.ox, y: kind.oy, l: kind.L + kerf, w: kind.W + kerf };
+  const sheet: PackedSheet = { kind, root, free: [root], used: 0 };
+  const placed: number[] = [];
+  for (const it of items) {
+    if (!sheet.free.length) break;
+    const b = bestFree(sheet, it, it.l + kerf, it.w + kerf, opts.fit);
+    if (!b) continue;
+    place(ctx, sheet, b.f, b.a, b.c, it.id, b.rot);
+    placed.push(it.id);
+  }
+  return { sheet, placed };
+}
+
 /**
  * One pass of global best fit: items in the given order, each into the best-fitting free region of any open sheet,
  * or onto a new sheet of the first kind (in `kinds` order) that still has sheets and takes it.

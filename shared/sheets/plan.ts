@@ -1,9 +1,13 @@
 // The sheet plan: many quick guillotine passes (orders × fit rules × split rules, then perturbed orders) and the
-// best kept — fewest sheets, then least cost, then the emptiest last sheet (a bigger offcut). Stops early when a
-// plan meets the certified lower bound. Deterministic for a given job and options (seeded perturbations).
+// best kept — fewest sheets, then least cost, then the emptiest last sheet (a bigger offcut) — with emptying moves
+// on the emptiest sheet (empty-last.ts). Stops early when a plan meets the certified lower bound.
+//
+// The work is counted in passes, not milliseconds, so the same job gives the same plan on a fast machine and a slow
+// one (perturbations are seeded). Time is only a safety stop; a plan cut short by it says so in `stats.stopped`.
 import { InputError } from '../errors';
 import { sheetLowerBound } from './bounds';
-import { nest, type Fit, type NestItem, type PackedSheet, type RegionNode, type SheetKind, type Split } from './guillotine';
+import { emptyLast } from './empty-last';
+import { nest, smallestSide, type Fit, type NestItem, type PackedSheet, type RegionNode, type SheetKind, type Split } from './guillotine';
 import { validateSheetJob, type SheetJob } from './job';
 
 export type SheetCut = { x1: number; y1: number; x2: number; y2: number; stage: number; kind: 'trim' | 'cut' };
@@ -16,9 +20,17 @@ export type SheetPlan = {
   waste_pct: number;
   cost: number;
   sheets: PlannedSheet[];
-  stats: { passes: number; elapsedMs: number };
+  stats: { passes: number; elapsedMs: number; stopped: 'bound' | 'passes' | 'time' };
 };
-export type SheetPlanOptions = { maxPasses?: number; timeLimitMs?: number; seed?: number };
+export type SheetPlanOptions = {
+  /** The work budget, in passes over all the parts (default 3000). */
+  maxPasses?: number;
+  /** Safety stop only (default 10 s): a plan that runs into it depends on the machine's speed. */
+  timeLimitMs?: number;
+  seed?: number;
+  /** The clock the safety stop reads (milliseconds); tests pass their own. */
+  now?: () => number;
+};
 
 const FITS: Fit[] = ['area', 'short-side', 'long-side'];
 const SPLITS: Split[] = ['short-leftover', 'long-leftover', 'min-area', 'max-area'];
@@ -29,6 +41,14 @@ const ORDERS: ((p: NestItem, q: NestItem) => number)[] = [
   (p, q) => q.l - p.l || q.w - p.w,
   (p, q) => q.w - p.w || q.l - p.l,
 ];
+
+/** Passes a plan may take: the benchmark's classes gain little beyond it, and a 100-part job stays well under 1 s. */
+export const DEFAULT_PASSES = 3000;
+
+const FULL = { orders: ORDERS, fits: FITS, splits: SPLITS };
+/** A quick emptying move on perturbed plans that tie the best: two orders, one fit rule, two split rules. */
+const LIGHT = { orders: ORDERS.slice(0, 2), fits: FITS.slice(0, 1), splits: SPLITS.slice(0, 2) };
+const LIGHT_WORK = 3;
 
 /** Small seeded generator (mulberry32) so perturbed passes repeat exactly. */
 function rng(seed: number): () => number {
@@ -54,7 +74,8 @@ const better = (a: [number, number, number], b: [number, number, number]): boole
 
 /** Plan a job on its sheets; throws InputError naming the field at fault, or when the sheets on hand run out. */
 export function planSheets(input: SheetJob | unknown, opts: SheetPlanOptions = {}): SheetPlan {
-  const t0 = Date.now();
+  const now = opts.now ?? Date.now;
+  const t0 = now();
   const job = validateSheetJob(input);
   const { kerf, trim } = job;
   const items: NestItem[] = [];
@@ -72,18 +93,38 @@ export function planSheets(input: SheetJob | unknown, opts: SheetPlanOptions = {
   const kinds = [...all.filter((k) => k.qty !== null), ...all.filter((k) => k.qty === null)];
   const { lowerBound, areaBound } = sheetLowerBound(items, kinds, kerf);
 
-  const maxPasses = opts.maxPasses ?? 600;
-  const timeLimit = opts.timeLimitMs ?? 800;
+  const maxPasses = opts.maxPasses ?? DEFAULT_PASSES;
+  const timeLimit = opts.timeLimitMs ?? 10_000;
+  let timedOut = false;
+  const overTime = (): boolean => (timedOut ||= now() - t0 > timeLimit);
   let best: Scored | null = null;
   let passes = 0;
-  const tryOrder = (order: NestItem[], fit: Fit, split: Split): void => {
+  const tryOrder = (order: NestItem[], fit: Fit, split: Split, light = 0): void => {
     passes++;
     const sheets = nest(order, kinds, kerf, { fit, split });
     if (!sheets) return;
     const key = keyOf(sheets);
     if (!best || better(key, best.key)) best = { sheets, order, key };
+    else if (light > 0 && key[0] === best.key[0]) polishPlan({ sheets, order, key }, light, LIGHT);
   };
-  const done = (): boolean => (best !== null && best.key[0] <= lowerBound) || passes >= maxPasses || Date.now() - t0 > timeLimit;
+  const done = (): boolean => (best !== null && best.key[0] <= lowerBound) || passes >= maxPasses || overTime();
+  const minSide = smallestSide(items);
+  const byId = new Map(items.map((it) => [it.id, it]));
+  // The emptying move on the best plan so far, with a share of the pass budget.
+  const polish = (share: number): void => {
+    if (best && !done()) polishPlan(best, maxPasses * share, FULL);
+  };
+  function polishPlan(b: Scored, work: number, rules: typeof FULL): void {
+    const budget = { left: Math.min(maxPasses - passes, work), n: items.length, over: overTime };
+    const start = budget.left;
+    const sheets = emptyLast(b.sheets, items, kerf, minSide, rules, budget);
+    passes += start - budget.left;
+    const key = keyOf(sheets);
+    if (!best || better(key, best.key)) {
+      const order = sheets.flatMap((sh) => [...collect(sh.root, new Set<number>())]).map((id) => byId.get(id) as NestItem);
+      best = { sheets, order, key };
+    }
+  }
 
   outer: for (const cmp of ORDERS) {
     const order = [...items].sort(cmp);
@@ -94,8 +135,10 @@ export function planSheets(input: SheetJob | unknown, opts: SheetPlanOptions = {
       }
     }
   }
+  polish(0.2);
   const rand = rng(opts.seed ?? 1);
-  while (!done() && best) {
+  // Perturbed passes up to 70 % of the budget; the rest for a last emptying move on the best of them.
+  while (!done() && best && passes < maxPasses * 0.7) {
     const b: Scored = best;
     let order: NestItem[];
     if (rand() < 0.3) {
@@ -113,13 +156,14 @@ export function planSheets(input: SheetJob | unknown, opts: SheetPlanOptions = {
         [order[i], order[j]] = [order[j], order[i]];
       }
     }
-    tryOrder(order, FITS[Math.floor(rand() * FITS.length)], SPLITS[Math.floor(rand() * SPLITS.length)]);
+    tryOrder(order, FITS[Math.floor(rand() * FITS.length)], SPLITS[Math.floor(rand() * SPLITS.length)], LIGHT_WORK);
   }
+  polish(1);
   if (!best) {
     throw new InputError('sheets', 'sheets: the sheets on hand run out before every part is placed; add a sheet without a qty (bought as needed)');
   }
   const chosen: Scored = best;
-  const out = chosen.sheets.map((s) => toPlanned(s, job.sheets[s.kind.index], kerf, trim, labels, sizes));
+  const out = chosen.sheets.map((s) => plannedSheet(s, job.sheets[s.kind.index], kerf, trim, labels, sizes));
   const partArea = sizes.reduce((a, s) => a + s.length * s.width, 0);
   const sheetArea = out.reduce((a, s) => a + s.length * s.width, 0);
   return {
@@ -129,17 +173,18 @@ export function planSheets(input: SheetJob | unknown, opts: SheetPlanOptions = {
     waste_pct: (1 - partArea / sheetArea) * 100,
     cost: chosen.key[1],
     sheets: out,
-    stats: { passes, elapsedMs: Date.now() - t0 },
+    stats: { passes: Math.round(passes), elapsedMs: now() - t0, stopped: chosen.key[0] <= lowerBound ? 'bound' : timedOut ? 'time' : 'passes' },
   };
 }
 
-function collect(n: RegionNode, ids: Set<number>): void {
+function collect(n: RegionNode, ids: Set<number>): Set<number> {
   if (n.item) ids.add(n.item.id);
   if (n.kids) for (const k of n.kids) collect(k, ids);
+  return ids;
 }
 
 /** Placements from the leaves, cuts in stages (breadth first: every cut is made on a piece an earlier cut freed). */
-function toPlanned(s: PackedSheet, stock: { length: number; width: number; label?: string; price?: number }, kerf: number, trim: number, labels: string[], sizes: { length: number; width: number }[]): PlannedSheet {
+export function plannedSheet(s: PackedSheet, stock: { length: number; width: number; label?: string; price?: number }, kerf: number, trim: number, labels: string[], sizes: { length: number; width: number }[]): PlannedSheet {
   const L = stock.length;
   const W = stock.width;
   const cuts: SheetCut[] = [];

@@ -6,7 +6,7 @@ import { planSheets, sheetJobsFromParts } from '@shared/sheets/index';
 import type { SheetPlanMaterial } from '../../pdf';
 
 /** A frame's sheet goods (drawers, faces, panels, countertop) planned per material on the builder's sheets. */
-export function frameSheetPlans(doc: Pick<FrameDocument, 'goods'>, report: FrameReport, timeLimitMs = 1500): (SheetPlanMaterial & { oversize: string[] })[] {
+export function frameSheetPlans(doc: Pick<FrameDocument, 'goods' | 'units'>, report: FrameReport, timeLimitMs = 1500): (SheetPlanMaterial & { oversize: string[] })[] {
   // Sheet goods fill bays; a frame without a run of bays has none.
   if (!report.bays.length) return [];
   const goods = sheetGoods(report, goodsOptionsOf(doc));

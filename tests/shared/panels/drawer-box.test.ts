@@ -1,3 +1,4 @@
+import { lengthText } from '@shared/display/format';
 import { describe, expect, it } from 'vitest';
 import { drawerBox, nominalSlideLength, slidePreset } from '@shared/panels/index';
 import { errorOf } from '../../support/input-error';
@@ -74,6 +75,11 @@ describe('side-mount slide, worked in millimetres', () => {
   });
   it('a groove deeper than half the side is refused, naming the field', () => {
     expect(errorOf(() => drawerBox({ opening: { width_mm: 500, height_mm: 200, depth_mm: 480 }, slide: slidePreset('side-mount'), thickness_mm: 12, grooveDepth_mm: 7 })).field).toBe('grooveDepth_mm');
+  });
+  it('the refusal says its lengths in the writer given: half of a 12 mm side is 6 mm = 7.56/32 in → 1/4", 7 mm = 8.82/32 in → 9/32" (to 1/32)', () => {
+    const input = { opening: { width_mm: 500, height_mm: 200, depth_mm: 480 }, slide: slidePreset('side-mount'), thickness_mm: 12, grooveDepth_mm: 7 };
+    expect(errorOf(() => drawerBox(input)).message).toContain('half the side\'s thickness, 6 mm');
+    expect(errorOf(() => drawerBox(input, (mm) => lengthText(mm, { display: 'in', frac: 32 }))).message).toContain('half the side\'s thickness, 1/4" (common practice; got 9/32")');
   });
   it('a depth shorter than the shortest slide is refused, naming the depth', () => {
     expect(errorOf(() => drawerBox({ opening: { width_mm: 500, height_mm: 200, depth_mm: 240 }, slide: slidePreset('side-mount') })).field).toBe('opening.depth_mm');

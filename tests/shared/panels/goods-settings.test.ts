@@ -5,7 +5,9 @@ import { sceneFromReport } from '@shared/editing/scene-from-report';
 import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun, parseCabinetSpec } from '@shared/model/cabinet-run';
 import { frameDocumentSchema } from '@shared/model/frame-document';
-import { goodsSettingsSchema, reportWithSheetGoods, sheetStockOf } from '@shared/panels/index';
+import { goodsSettingsOf, goodsSettingsSchema, reportWithSheetGoods, sheetStockOf, withGoodsSettings } from '@shared/panels/index';
+import { usualSheetInstead } from '@shared/sheets/from-goods';
+import { frameDefaults, workshopSettingsSchema, withWorkshopDefaults } from '@shared/api/workshop-settings';
 import { parseFrameDocument } from '@shared/model/parse';
 
 // The example side galley (scripts/examples/side-galley-spec.json, invented): the drawer over the cooler has a
@@ -63,5 +65,39 @@ describe('sheet-goods choices kept with the frame', () => {
     expect(change.ops).toHaveLength(1);
     expect(applyChange(doc, change).goods?.slide).toBe('under-mount');
     expect(applyChange(applyChange(doc, change), invertChange(change)).goods).toBeUndefined();
+  });
+  describe('the default sheet follows the frame’s length unit', () => {
+    // 8 × 4 ft from the international foot, exactly 0.3048 m (international yard and pound agreement, 1959):
+    // 8 × 304.8 = 2438.4 mm and 4 × 304.8 = 1219.2 mm. The metric sheet 2440 × 1220 mm is common practice, no source.
+    const inchDoc = { ...doc, units: { ...doc.units, display: 'in' as const } };
+    it('a frame reading inches plans on 8 × 4 ft = 2438.4 × 1219.2 mm; one reading mm on 2440 × 1220 mm', () => {
+      expect(sheetStockOf(inchDoc).sheets).toEqual([{ length: 2438.4, width: 1219.2, qty: null }]);
+      expect(goodsSettingsOf(inchDoc).sheet).toEqual({ length: 2438.4, width: 1219.2 });
+      expect(goodsSettingsOf(doc).sheet).toEqual({ length: 2440, width: 1220 });
+    });
+    it('a new frame in an inch workshop takes the inch sheet from the units the workshop gives it', () => {
+      const ws = workshopSettingsSchema.parse({ units: { length: 'in', mass: 'lb' } });
+      expect(frameDefaults(ws).units?.display).toBe('in');
+      const fresh = parseFrameDocument(withWorkshopDefaults({ schemaVersion: 1 }, ws));
+      expect(goodsSettingsOf(fresh).sheet).toEqual({ length: 304.8 * 8, width: 304.8 * 4 });
+    });
+    it('another choice leaves the sheet unset, so it still follows the unit; a sheet set stays as set when the unit changes', () => {
+      const chose = withGoodsSettings(inchDoc, { joint: 'dado' });
+      expect(chose?.goods?.sheet).toBeUndefined();
+      expect(goodsSettingsOf(chose!).sheet.length).toBe(2438.4);
+      const set = withGoodsSettings(doc, { sheet: { length: 2440, width: 1220 } })!;
+      const nowInches = { ...set, units: { ...set.units, display: 'in' as const } };
+      expect(goodsSettingsOf(nowInches).sheet).toEqual({ length: 2440, width: 1220 });
+      // …and the usual inch sheet is offered for it, not put in its place.
+      expect(usualSheetInstead(goodsSettingsOf(nowInches).sheet, 'in')).toEqual({ length: 2438.4, width: 1219.2 });
+      expect(usualSheetInstead({ length: 2500, width: 1250 }, 'in')).toBeNull();
+      expect(usualSheetInstead({ length: 2440, width: 1220 }, 'mm')).toBeNull();
+    });
+    it('a stored frame’s sheet survives parsing unchanged, and one stored without a sheet keeps none', () => {
+      const stored = JSON.parse(JSON.stringify({ ...inchDoc, goods: { joint: 'dado', sheet: { length: 2440, width: 1220 } } }));
+      expect(parseFrameDocument(stored).goods?.sheet).toEqual({ length: 2440, width: 1220 });
+      const bare = JSON.parse(JSON.stringify({ ...inchDoc, goods: { joint: 'dado' } }));
+      expect(parseFrameDocument(bare).goods?.sheet).toBeUndefined();
+    });
   });
 });

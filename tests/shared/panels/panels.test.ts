@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { bayPanel, countertop, drawerFaces, partMass_kg, SHEET_MATERIALS } from '@shared/panels/index';
+import { readFileSync } from 'node:fs';
+import { lengthText } from '@shared/display/format';
+import { buildCabinetRun, parseCabinetSpec } from '@shared/model/cabinet-run';
+import { bayPanel, countertop, drawerFaces, partMass_kg, reportWithSheetGoods, SHEET_MATERIALS } from '@shared/panels/index';
 import { errorOf } from '../../support/input-error';
 
 // An example frame (invented): 40×40 slot 8 profile, uprights at 0 and 640 mm (outer faces), rails at the floor
@@ -38,6 +41,21 @@ describe('countertop', () => {
     expect(c.part.length_mm).toBe(1210);
     expect(c.part.width_mm).toBe(585);
     expect(c.cutout).toEqual({ x_mm: 707, y_mm: 102, length_mm: 406, width_mm: 356 });
+  });
+  it('a sink close to the front edge: web 25 + 10 − 3 = 32 mm, said in the reader’s unit (32 / 25.4 = 1.26 in → 1 1/4" to 1/16)', () => {
+    const input = { run: { length_mm: 1200, depth_mm: 560 }, overhang: { front_mm: 25, back_mm: 0, left_mm: 0, right_mm: 0 }, sink: { x_mm: 400, y_mm: 10, w_mm: 400, d_mm: 350 }, clearance_mm: 3 };
+    expect(countertop(input).notes.find((n) => n.startsWith('Only'))).toBe('Only 32 mm of top left in front of or behind the sink: it may crack there.');
+    const inches = countertop(input, (mm) => lengthText(mm, { display: 'in', frac: 16 })).notes.find((n) => n.startsWith('Only'));
+    expect(inches).toBe('Only 1 1/4" of top left in front of or behind the sink: it may crack there.');
+  });
+  it('the frame’s notes follow its unit: the example galley’s sink moved to 20 mm from the front leaves 20 + 20 − 3 = 37 mm (1 7/16" to 1/16)', () => {
+    // scripts/examples/side-galley-spec.json (invented): 20 mm front overhang and 3 mm clearance are the defaults.
+    const spec = parseCabinetSpec(JSON.parse(readFileSync(new URL('../../../scripts/examples/side-galley-spec.json', import.meta.url), 'utf8')));
+    const doc = buildCabinetRun(spec);
+    const near = { ...doc, modules: doc.modules.map((m) => (m.kind === 'sink' ? { ...m, place: { ...m.place, y: { datum: 'front', offset_mm: 20 } } } : m)) } as typeof doc;
+    const note = (d: typeof doc) => reportWithSheetGoods(d).goods?.notes.find((n) => n.startsWith('Only'));
+    expect(note(near)).toBe('Only 37 mm of top left in front of or behind the sink: it may crack there.');
+    expect(note({ ...near, units: { ...near.units, display: 'in' } })).toBe('Only 1 7/16" of top left in front of or behind the sink: it may crack there.');
   });
   it('a sink past the end of the run is refused', () => {
     expect(errorOf(() => countertop({ run: { length_mm: 600, depth_mm: 560 }, sink: { x_mm: 400, y_mm: 80, w_mm: 400, d_mm: 350 } })).field).toBe('sink');
