@@ -27,7 +27,13 @@ describe('ordering from a supplier', () => {
     await page.getByLabel('Fee per cut (cut to length)').fill('1.20');
     await page.getByLabel('Price per bar').first().fill('38');
     await page.getByRole('button', { name: 'Save supplier' }).click();
-    await page.getByRole('cell', { name: SUPPLIER, exact: true }).first().waitFor();
+    // Should the save be refused, say what the form said rather than only that the row never came.
+    const row = page.getByRole('cell', { name: SUPPLIER, exact: true }).first();
+    await row.waitFor({ timeout: 30_000 }).catch(async (e: unknown) => {
+      const form = page.getByRole('dialog');
+      const said = (await form.count()) ? await form.first().innerText() : '(the form is closed)';
+      throw new Error(`the saved supplier is not listed: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}; the form reads: ${said}`);
+    });
     expect(await page.getByRole('row', { name: new RegExp(SUPPLIER) }).innerText()).toContain('6000 mm');
   });
 
