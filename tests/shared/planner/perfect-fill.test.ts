@@ -3,7 +3,8 @@
 // small lists with none are checked by hand.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { exactCoverPack, exactFillSets } from '../../../shared/planner/core/exact-cover';
+import { coverSearch } from '../../../shared/planner/core/cover-search';
+import { exactFillSets } from '../../../shared/planner/core/exact-cover';
 import { perfectFill, perfectPack } from '../../../shared/planner/core/perfect-fill';
 import { planCutsSync } from '../../../shared/planner';
 import { splitList } from '../../../scripts/bench-cut/generated';
@@ -34,7 +35,7 @@ describe('perfect packing', () => {
   it('fills every bar exactly on lists of 2–6 random pieces per bar', () => {
     for (const seed of [201, 202, 203]) {
       const { bars, sizes, demand } = lengths(seed, 'split');
-      const out = perfectPack(sizes, demand, CAP, { fillNodes: 20 * bars, coverNodes: 50_000, outOfTime: never });
+      const out = perfectPack(sizes, demand, CAP, { fillNodes: 20 * bars, coverWork: 50_000, outOfTime: never });
       expectPerfect(out, sizes, demand, CAP);
       expect(out!.length).toBe(bars);
     }
@@ -45,14 +46,14 @@ describe('perfect packing', () => {
       const { sizes, demand } = lengths(seed, 'triplets');
       const sets = exactFillSets(sizes, demand, CAP, 3);
       expect(sets).not.toBeNull();
-      expectPerfect(exactCoverPack(sizes, demand, sets!, 200_000, never), sizes, demand, CAP);
+      expectPerfect(coverSearch(sizes, demand, sets!, { workLimit: 200_000, outOfTime: never }), sizes, demand, CAP);
     }
   });
 
   it('reports no packing where none exists (by hand: 5 + 4 + 3 in bars of 6 has no exact fill for the 5)', () => {
-    expect(perfectPack([5, 4, 3], [1, 1, 1], 6, { fillNodes: 100, coverNodes: 100, outOfTime: never })).toBeNull();
+    expect(perfectPack([5, 4, 3], [1, 1, 1], 6, { fillNodes: 100, coverWork: 100, outOfTime: never })).toBeNull();
     // By hand: 4 + 2 and 3 + 3 fill two bars of 6 exactly.
-    expectPerfect(perfectPack([4, 3, 2], [1, 2, 1], 6, { fillNodes: 100, coverNodes: 100, outOfTime: never }), [4, 3, 2], [1, 2, 1], 6);
+    expectPerfect(perfectPack([4, 3, 2], [1, 2, 1], 6, { fillNodes: 100, coverWork: 100, outOfTime: never }), [4, 3, 2], [1, 2, 1], 6);
     // A total that is no whole number of bars has no perfect packing.
     expect(perfectFill([4, 3], [1, 1], 6, { nodeLimit: 10, restartNodes: 10, outOfTime: never })).toBeNull();
   });
