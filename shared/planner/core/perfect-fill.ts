@@ -4,7 +4,8 @@
 // programme as a bit set) lists only completions that exist, so the search never walks into a dead end inside one bar,
 // and the last bar is always exact. Completions are tried largest parts first (the small ones are kept to fill the
 // last bars), with depth-first backtracking across bars and randomised restarts; a node budget keeps it bounded.
-import { exactCoverPack, exactFillSets } from './exact-cover';
+import { coverSearch } from './cover-search';
+import { exactFillSets } from './exact-cover';
 
 export interface PerfectFillOptions {
   /** Most bars placed in all, over every restart (deterministic for a given job). */
@@ -163,29 +164,38 @@ const MAX_TABLE_WORDS = 4_000_000;
 const MAX_COVER_PIECES = 320;
 
 export interface PerfectPackOptions {
-  /** Bars placed by the bar-by-bar search, and nodes of the exact-cover search. */
+  /** Bars placed by the bar-by-bar search, and subsets taken (search and probes) by the exact-cover search. */
   fillNodes: number;
-  coverNodes: number;
+  coverWork: number;
   outOfTime: () => boolean;
 }
 
 /**
- * A perfect packing of parts adding up to exactly a whole number of bars: first bar by bar (./perfectFill; lists with
- * many parts of varied lengths to a bar, where exact fills abound), then as an exact cover of the few subsets of up to
- * three parts that fill a bar (./exact-cover; lists of about three parts to a bar). Null when neither finds one.
+ * A perfect packing of parts adding up to exactly a whole number of bars, by two searches: bar by bar (./perfectFill;
+ * lists with many parts of varied lengths to a bar, where exact fills abound) and as an exact cover of the few subsets
+ * of up to three or four parts that fill a bar (./cover-search; lists of about three parts to a bar). Lists of at most
+ * three parts to a bar on average go to the exact cover first. Null when neither finds one.
  */
 export function perfectPack(sizes: ArrayLike<number>, demand: ArrayLike<number>, cap: number, opts: PerfectPackOptions): Int32Array[] | null {
   let active = 0;
   let pieces = 0;
+  let total = 0;
   for (let i = 0; i < sizes.length; i++) {
     if (demand[i] > 0) active++;
     pieces += demand[i];
+    total += sizes[i] * demand[i];
   }
-  if ((active + 1) * ((cap >> 5) + 1) <= MAX_TABLE_WORDS) {
+  if (total % cap !== 0) return null;
+  const bars = total / cap;
+  const cover = (): Int32Array[] | null => {
+    if (opts.outOfTime() || pieces > MAX_COVER_PIECES || pieces > 4 * bars) return null;
+    const sets = exactFillSets(sizes, demand, cap, pieces <= 3 * bars ? 3 : 4);
+    return sets ? coverSearch(sizes, demand, sets, { workLimit: opts.coverWork, outOfTime: opts.outOfTime }) : null;
+  };
+  const fill = (): Int32Array[] | null => {
+    if (opts.outOfTime() || (active + 1) * ((cap >> 5) + 1) > MAX_TABLE_WORDS) return null;
     const r = perfectFill(sizes, demand, cap, { nodeLimit: opts.fillNodes, restartNodes: opts.fillNodes, outOfTime: opts.outOfTime });
-    if (r && r.rest.every((c) => c === 0)) return r.bars;
-  }
-  if (opts.outOfTime() || pieces > MAX_COVER_PIECES) return null;
-  const sets = exactFillSets(sizes, demand, cap, 3);
-  return sets ? exactCoverPack(sizes, demand, sets, opts.coverNodes, opts.outOfTime) : null;
+    return r && r.rest.every((c) => c === 0) ? r.bars : null;
+  };
+  return pieces <= 3 * bars ? (cover() ?? fill()) : (fill() ?? cover());
 }

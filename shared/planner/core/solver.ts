@@ -31,11 +31,11 @@ const ROOT_SHARE = 0.7;
 const MBS_SHARE = 0.01;
 /**
  * Perfect packing (./perfect-fill) when the parts fill the bound's bars exactly: its share of the schedule, bars placed
- * per bar of the list in the bar-by-bar search, and nodes of the exact-cover search.
+ * per bar of the list in the bar-by-bar search, and subsets taken (search and probes) by the exact-cover search.
  */
 const PERFECT_SHARE = 0.35;
 const PERFECT_FILL_NODES_PER_BAR = 20;
-const PERFECT_COVER_NODES = 200_000;
+const PERFECT_COVER_WORK = 400_000;
 /** Longer lists (500 three-part pieces) keep the stage's time for repacking, the LP and its dives, which solve them. */
 const PERFECT_MAX_PIECES = 480;
 /** Enumeration nodes per bar when minimum bin slack completes a dive node's residual: cheap enough to run at every node. */
@@ -216,7 +216,7 @@ export function* solveCore(p: Problem, opts: CoreOptions): Generator<CoreProgres
     const until = t0 + SCHEDULE_MS * PERFECT_SHARE;
     const bars = perfectPack(p.sizes, p.demand, p.types[0].capacity, {
       fillNodes: PERFECT_FILL_NODES_PER_BAR * lower,
-      coverNodes: PERFECT_COVER_NODES,
+      coverWork: PERFECT_COVER_WORK,
       outOfTime: () => opts.now() > Math.min(until, opts.deadline),
     });
     if (bars) offer(onFirstStock(bars));

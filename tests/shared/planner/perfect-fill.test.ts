@@ -3,7 +3,8 @@
 // small lists with none are checked by hand.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { exactCoverPack, exactFillSets } from '../../../shared/planner/core/exact-cover';
+import { coverSearch } from '../../../shared/planner/core/cover-search';
+import { exactFillSets } from '../../../shared/planner/core/exact-cover';
 import { perfectFill, perfectPack } from '../../../shared/planner/core/perfect-fill';
 import { planCutsSync } from '../../../shared/planner';
 import { splitList } from '../../../scripts/bench-cut/generated';
@@ -34,25 +35,26 @@ describe('perfect packing', () => {
   it('fills every bar exactly on lists of 2–6 random pieces per bar', () => {
     for (const seed of [201, 202, 203]) {
       const { bars, sizes, demand } = lengths(seed, 'split');
-      const out = perfectPack(sizes, demand, CAP, { fillNodes: 20 * bars, coverNodes: 50_000, outOfTime: never });
+      const out = perfectPack(sizes, demand, CAP, { fillNodes: 20 * bars, coverWork: 50_000, outOfTime: never });
       expectPerfect(out, sizes, demand, CAP);
       expect(out!.length).toBe(bars);
     }
   });
 
   it('finds the exact cover of three-part bars on triplet lists', () => {
-    for (const seed of [3, 10]) {
+    // Seed 2 (79 bars, 429 subsets) is one whose cover plain Algorithm X missed within 200,000 nodes.
+    for (const seed of [2, 3, 10]) {
       const { sizes, demand } = lengths(seed, 'triplets');
       const sets = exactFillSets(sizes, demand, CAP, 3);
       expect(sets).not.toBeNull();
-      expectPerfect(exactCoverPack(sizes, demand, sets!, 200_000, never), sizes, demand, CAP);
+      expectPerfect(coverSearch(sizes, demand, sets!, { workLimit: 200_000, outOfTime: never }), sizes, demand, CAP);
     }
   });
 
   it('reports no packing where none exists (by hand: 5 + 4 + 3 in bars of 6 has no exact fill for the 5)', () => {
-    expect(perfectPack([5, 4, 3], [1, 1, 1], 6, { fillNodes: 100, coverNodes: 100, outOfTime: never })).toBeNull();
+    expect(perfectPack([5, 4, 3], [1, 1, 1], 6, { fillNodes: 100, coverWork: 100, outOfTime: never })).toBeNull();
     // By hand: 4 + 2 and 3 + 3 fill two bars of 6 exactly.
-    expectPerfect(perfectPack([4, 3, 2], [1, 2, 1], 6, { fillNodes: 100, coverNodes: 100, outOfTime: never }), [4, 3, 2], [1, 2, 1], 6);
+    expectPerfect(perfectPack([4, 3, 2], [1, 2, 1], 6, { fillNodes: 100, coverWork: 100, outOfTime: never }), [4, 3, 2], [1, 2, 1], 6);
     // A total that is no whole number of bars has no perfect packing.
     expect(perfectFill([4, 3], [1, 1], 6, { nodeLimit: 10, restartNodes: 10, outOfTime: never })).toBeNull();
   });
@@ -77,4 +79,23 @@ describe('perfect packing', () => {
       { numRuns: 12, seed: 44 },
     );
   }, 120_000);
+
+  it('plans lists of bars cut into three random parts, up to 100 bars, at the bar count they were cut from', () => {
+    // Three parts to a bar, kerf 0: the parts fill exactly the bars they came from, so that count is the optimum.
+    const bar = fc.uniqueArray(fc.integer({ min: 1, max: CAP - 1 }), { minLength: 2, maxLength: 2 });
+    fc.assert(
+      fc.property(fc.array(bar, { minLength: 20, maxLength: 100, size: 'max' }), (cutsPerBar) => {
+        const counts = new Map<number, number>();
+        for (const cuts of cutsPerBar) {
+          const at = [0, ...cuts.sort((a, b) => a - b), CAP];
+          for (let k = 1; k < at.length; k++) counts.set(at[k] - at[k - 1], (counts.get(at[k] - at[k - 1]) ?? 0) + 1);
+        }
+        const job = { kerf: 0, trim: 0, minOffcut: 0, stock: [{ length: CAP }], parts: [...counts].map(([length, qty]) => ({ length, qty, label: `${length}` })) };
+        let t = 0;
+        const plan = planCutsSync(job, { timeLimitMs: 2000, clock: () => (t += 0.05) });
+        expect(plan.barCount).toBe(cutsPerBar.length);
+      }),
+      { numRuns: 10, seed: 15 },
+    );
+  }, 240_000);
 });
