@@ -22,15 +22,27 @@ describe('ordering from a supplier', () => {
     await page.getByRole('link', { name: 'Suppliers' }).click();
     await page.getByRole('heading', { name: 'Suppliers and stock', level: 1 }).waitFor();
     await page.getByRole('button', { name: 'New supplier' }).click();
+    // Fill the form once it has opened: while the dialog is still coming in, focus can move to its first field in
+    // the middle of typing into another (the e-mail once landed at the end of the name).
+    const form = page.getByRole('dialog');
+    await form.waitFor();
+    await form.evaluate((el) =>
+      Promise.all(
+        el
+          .getAnimations({ subtree: true })
+          .filter((a) => Number.isFinite(Number(a.effect?.getComputedTiming().endTime)))
+          .map((a) => a.finished),
+      ).then(() => undefined),
+    );
     await page.getByLabel('Name').fill(SUPPLIER);
     await page.getByLabel('Order e-mail').fill('orders@northgate.test');
     await page.getByLabel('Fee per cut (cut to length)').fill('1.20');
     await page.getByLabel('Price per bar').first().fill('38');
+    expect([await page.getByLabel('Name').inputValue(), await page.getByLabel('Order e-mail').inputValue()]).toEqual([SUPPLIER, 'orders@northgate.test']);
     await page.getByRole('button', { name: 'Save supplier' }).click();
     // Should the save be refused, say what the form said rather than only that the row never came.
     const row = page.getByRole('cell', { name: SUPPLIER, exact: true }).first();
     await row.waitFor({ timeout: 30_000 }).catch(async (e: unknown) => {
-      const form = page.getByRole('dialog');
       const said = (await form.count()) ? await form.first().innerText() : '(the form is closed)';
       throw new Error(`the saved supplier is not listed: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}; the form reads: ${said}`);
     });
