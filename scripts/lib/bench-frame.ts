@@ -25,22 +25,18 @@ export function benchFrame(bays = 50): FrameDocument {
       },
     });
   }
-  // A run holds at most MAX_BAYS bays: longer frames are runs of equal length, one behind another.
-  const runs = Math.ceil(bays / MAX_BAYS);
-  const per = Math.ceil(bays / runs);
-  const spec = (k: number): CabinetSpec => ({
-    name: 'Bench run',
-    profile: '40x40-s8',
-    depth_mm: 600,
-    height_mm: 900,
-    seat_mm: 120,
-    clearance_mm: 10,
-    bays: list.slice(k * per, (k + 1) * per),
-  });
+  return runsOf(list, { name: 'Bench run', profile: '40x40-s8', depth_mm: 600, height_mm: 900, seat_mm: 120, clearance_mm: 10 }, 800);
+}
+
+/** A run holds at most MAX_BAYS bays: longer frames are runs of equal length, one behind another, `pitch` apart. */
+function runsOf(list: CabinetBay[], base: Omit<CabinetSpec, 'bays'>, pitch: number): FrameDocument {
+  const runs = Math.ceil(list.length / MAX_BAYS);
+  const per = Math.ceil(list.length / runs);
+  const spec = (k: number): CabinetSpec => ({ ...base, bays: list.slice(k * per, (k + 1) * per) });
   let doc = buildCabinetRun(spec(0));
   for (let k = 1; k < runs; k++) {
-    const added = addCabinetRun(doc, spec(k), { x: 0, y: k * 800, z: 0 });
-    if (!added.ok) throw new Error(`bench frame: ${added.reason}`);
+    const added = addCabinetRun(doc, spec(k), { x: 0, y: k * pitch, z: 0 });
+    if (!added.ok) throw new Error(`${base.name}: ${added.reason}`);
     doc = added.doc;
   }
   return doc;
@@ -81,14 +77,5 @@ export function heldOutFrame(bays = 16): FrameDocument {
       });
     }
   }
-  const runs = Math.ceil(bays / MAX_BAYS);
-  const per = Math.ceil(bays / runs);
-  const spec = (k: number): CabinetSpec => ({ name: 'Held-out run', profile: '40x40-s8', depth_mm: 520, height_mm: 860, seat_mm: 100, clearance_mm: 10, bays: list.slice(k * per, (k + 1) * per) });
-  let doc = buildCabinetRun(spec(0));
-  for (let k = 1; k < runs; k++) {
-    const added = addCabinetRun(doc, spec(k), { x: 0, y: k * 700, z: 0 });
-    if (!added.ok) throw new Error(`held-out frame: ${added.reason}`);
-    doc = added.doc;
-  }
-  return doc;
+  return runsOf(list, { name: 'Held-out run', profile: '40x40-s8', depth_mm: 520, height_mm: 860, seat_mm: 100, clearance_mm: 10 }, 700);
 }

@@ -5,7 +5,7 @@ import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 import { resultsSettled, toScreen } from './editor-helpers';
 
 // A brand-new account lays out the default cabinet (cooler, sink, drawer stack): the drawer boxes, panels and
@@ -19,9 +19,7 @@ describe('drawers and panels in the editor’s views, from an empty account', ()
     const stamp = Date.now().toString(36);
     await signUp(page, `drawers-${stamp}@example.test`);
     await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page);
   });
 
   it('draws each drawer box thin and translucent, hides them on request, and lists their hardware and parts', async () => {

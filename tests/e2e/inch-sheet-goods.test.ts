@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 
 // A workshop in inches and pounds: its frames plan on 8 × 4 ft sheets (96" × 48" exactly, 1 ft = 304.8 mm by the
 // 1959 international foot), and sheet densities read and type in lb/ft³ (1 lb/ft³ = 16.018463 kg/m³, same source).
@@ -30,12 +30,7 @@ describe('sheet goods in an inch and pound workshop', () => {
   it('a new frame’s Drawers & panels tab: 96" × 48" sheets, densities in lb/ft³, a bare number read in lb/ft³', async () => {
     await page.getByRole('link', { name: 'Projects' }).click();
     await page.getByRole('link', { name: 'Van' }).click();
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    const dialog = page.getByTestId('cabinet-layout');
-    await dialog.waitFor();
-    await dialog.getByLabel('Name').first().fill('Inch galley');
-    await dialog.getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page, 'Inch galley');
     await page.getByRole('tab', { name: 'Drawers & panels' }).click();
     await page.getByTestId('plan-sheets').waitFor();
     expect(await page.getByTestId('plan-sheets').innerText()).toContain('96" × 48"');

@@ -2,7 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 import { cutListRows } from './editor-helpers';
 import { pdfText } from '../support/pdf-text';
 
@@ -43,12 +43,7 @@ describe('an inch workshop from an empty account', () => {
   it('a new frame is in inches: cut list, weight and its Settings tab', async () => {
     await page.getByRole('link', { name: 'Projects' }).click();
     await page.getByRole('link', { name: 'Bench' }).click();
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    const dialog = page.getByTestId('cabinet-layout');
-    await dialog.waitFor();
-    await dialog.getByLabel('Name').first().fill('Inch galley');
-    await dialog.getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page, 'Inch galley');
     frameUrl = page.url();
     const rows = await cutListRows(page);
     expect(rows.length).toBeGreaterThan(1);

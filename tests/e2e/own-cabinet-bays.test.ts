@@ -6,7 +6,7 @@ import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { bearingByModule, fieldValue, itemInView, pickMember, resultsSettled, toScreen } from './editor-helpers';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 
 // From a brand-new account: a bay moved along the run by dragging its module on the canvas, and a bay's stack
 // edited in the Bays tab (a shelf added over the cooler, the cooler made taller, the two swapped, the shelf removed).
@@ -19,9 +19,7 @@ describe('bays reordered on the canvas and stacks edited in the editor, on a cab
     page = opened;
     await signUp(page, `bays-${Date.now().toString(36)}@example.test`);
     await newWorkshopAndProject(page, 'Van shop', 'My galley');
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page);
   });
 
   it('drags the cooler’s bay to the end of the run; the uprights follow; undo puts it back', async () => {

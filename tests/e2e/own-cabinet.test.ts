@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 import { computeReport } from '@shared/engine/report';
 import { formatLength } from '@shared/geometry/units';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
@@ -112,9 +112,7 @@ describe('options of a module, compared side by side', () => {
     page = opened;
     await signUp(page, `options-${stamp}@example.test`);
     await newWorkshopAndProject(page, `Van shop ${stamp}`, 'My galley');
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page);
   });
 
   it('adds a heavier sink as an option, compares it, uses it, and one undo goes back', async () => {

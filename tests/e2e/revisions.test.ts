@@ -4,7 +4,7 @@ import { computeReport } from '@shared/engine/report';
 import { buildCabinetRun } from '@shared/model/cabinet-run';
 import { defaultDraft, specFromDraft } from '@/editor/cabinet/cabinet-draft';
 import { screenshotPath, useBrowserPage } from './support/browser';
-import { newWorkshopAndProject, signUp } from './support/fresh-account';
+import { newWorkshopAndProject, signUp, newFrameFromLayout } from './support/fresh-account';
 import { cutListRows, drawRailBetween, swapModules } from './editor-helpers';
 
 // From a brand-new account: lay out a cabinet, draw a rail, save a named revision, change the frame, compare the
@@ -27,9 +27,7 @@ describe('revisions of a frame: save, name, compare, restore', () => {
   });
 
   it('keeps one revision per stretch, compares two with the changes marked, and restores one as a new version', async () => {
-    await page.getByRole('button', { name: 'From a cabinet layout' }).click();
-    await page.getByTestId('cabinet-layout').getByRole('button', { name: 'Create', exact: true }).click();
-    await page.getByTestId('frame-editor').waitFor();
+    await newFrameFromLayout(page);
     await page.waitForTimeout(400);
 
     // Draw a shelf rail across the second bay; it autosaves.

@@ -60,6 +60,15 @@ describe('sheet-goods choices saved with the frame', () => {
     expect(read.version).toBe(created.version);
   });
 
+  it('a density or a sheet past its bounds is refused naming the field', async () => {
+    const dense = await designer.post(`/api/projects/${projectId}/frames`, { name: 'Dense', document: { ...galley(), goods: { densities: { 'birch-18': 5 } } } });
+    expect(dense.status).toBe(422);
+    expect(Object.keys(dense.body.error.fields).join(' ')).toMatch(/document\.goods\.densities/);
+    const huge = await designer.post(`/api/projects/${projectId}/frames`, { name: 'Huge', document: { ...galley(), goods: { sheet: { length: 1e9, width: 1220 } } } });
+    expect(huge.status).toBe(422);
+    expect(Object.keys(huge.body.error.fields).join(' ')).toMatch(/document\.goods\.sheet/);
+  });
+
   it('an unknown slide type is refused naming the field', async () => {
     const res = await designer.post(`/api/projects/${projectId}/frames`, { name: 'Bad', document: { ...galley(), goods: { slide: 'wooden-runner' } } });
     expect(res.status).toBe(422);

@@ -24,3 +24,13 @@ export async function newWorkshopAndProject(page: Page, workshop: string, projec
   await page.getByRole('button', { name: 'Create project' }).click();
   await page.getByRole('heading', { name: project, level: 1 }).waitFor();
 }
+
+/** From a project's page: a new frame from the cabinet-layout dialog's default layout (named, if given), left open. */
+export async function newFrameFromLayout(page: Page, name?: string): Promise<void> {
+  await page.getByRole('button', { name: 'From a cabinet layout' }).click();
+  const dialog = page.getByTestId('cabinet-layout');
+  await dialog.waitFor();
+  if (name !== undefined) await dialog.getByLabel('Name').first().fill(name);
+  await dialog.getByRole('button', { name: 'Create', exact: true }).click();
+  await page.getByTestId('frame-editor').waitFor();
+}

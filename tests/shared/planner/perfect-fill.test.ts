@@ -59,16 +59,21 @@ describe('perfect packing', () => {
     expect(perfectFill([4, 3], [1, 1], 6, { nodeLimit: 10, restartNodes: 10, outOfTime: never })).toBeNull();
   });
 
+  /** Bars of CAP cut at the given points, kerf 0: their pieces fill exactly that many bars, which is the optimum. */
+  const jobFromCuts = (cutsPerBar: number[][]) => {
+    const counts = new Map<number, number>();
+    for (const cuts of cutsPerBar) {
+      const at = [0, ...[...cuts].sort((a, b) => a - b), CAP];
+      for (let k = 1; k < at.length; k++) counts.set(at[k] - at[k - 1], (counts.get(at[k] - at[k - 1]) ?? 0) + 1);
+    }
+    return { kerf: 0, trim: 0, minOffcut: 0, stock: [{ length: CAP }], parts: [...counts].map(([length, qty]) => ({ length, qty, label: `${length}` })) };
+  };
+
   it('plans random whole-bar cuts at the bar count they were cut from, and a longer limit never does worse', () => {
     const arb = fc.array(fc.uniqueArray(fc.integer({ min: 1, max: CAP - 1 }), { minLength: 1, maxLength: 5 }), { minLength: 2, maxLength: 15 });
     fc.assert(
       fc.property(arb, fc.integer({ min: 1, max: 40 }), (cutsPerBar, short) => {
-        const counts = new Map<number, number>();
-        for (const cuts of cutsPerBar) {
-          const at = [0, ...cuts.sort((a, b) => a - b), CAP];
-          for (let k = 1; k < at.length; k++) counts.set(at[k] - at[k - 1], (counts.get(at[k] - at[k - 1]) ?? 0) + 1);
-        }
-        const job = { kerf: 0, trim: 0, minOffcut: 0, stock: [{ length: CAP }], parts: [...counts].map(([length, qty]) => ({ length, qty, label: `${length}` })) };
+        const job = jobFromCuts(cutsPerBar);
         let t = 0;
         const a = planCutsSync(job, { timeLimitMs: short, clock: () => (t += 0.05) });
         let u = 0;
@@ -85,12 +90,7 @@ describe('perfect packing', () => {
     const bar = fc.uniqueArray(fc.integer({ min: 1, max: CAP - 1 }), { minLength: 2, maxLength: 2 });
     fc.assert(
       fc.property(fc.array(bar, { minLength: 20, maxLength: 100, size: 'max' }), (cutsPerBar) => {
-        const counts = new Map<number, number>();
-        for (const cuts of cutsPerBar) {
-          const at = [0, ...cuts.sort((a, b) => a - b), CAP];
-          for (let k = 1; k < at.length; k++) counts.set(at[k] - at[k - 1], (counts.get(at[k] - at[k - 1]) ?? 0) + 1);
-        }
-        const job = { kerf: 0, trim: 0, minOffcut: 0, stock: [{ length: CAP }], parts: [...counts].map(([length, qty]) => ({ length, qty, label: `${length}` })) };
+        const job = jobFromCuts(cutsPerBar);
         let t = 0;
         const plan = planCutsSync(job, { timeLimitMs: 2000, clock: () => (t += 0.05) });
         expect(plan.barCount).toBe(cutsPerBar.length);
