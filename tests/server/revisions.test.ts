@@ -7,7 +7,9 @@ import {
   revisionSummarySchema,
   type FrameDocumentJson,
 } from '@shared/api/frames';
+import { computeReport } from '@shared/engine/report';
 import { demoFrameDocument } from '@shared/model/demo-frame';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { Frame } from '../../server/modules/frames/frame.entity';
 import { ProjectClient } from '../../server/modules/access/project-client.entity';
 import { Project } from '../../server/modules/projects/project.entity';
@@ -188,6 +190,17 @@ describe('comparing two revisions', () => {
     // A comparison with itself has nothing to mark.
     const same = revisionComparisonSchema.parse((await owner.get(`/api/frames/${f.id}/revisions/compare?from=2&to=2`).expect(200)).body).diff;
     expect([same.totals.added, same.totals.removed, same.totals.moved, same.totals.changed, same.cut_list.length, same.hardware.length]).toEqual([0, 0, 0, 0, 0, 0]);
+  });
+
+  it('reads masses and hardware with the sheet goods, as the frame’s own report does', async () => {
+    const base = demoFrameDocument();
+    const f = frameSchema.parse((await designer.post(`/api/projects/${projectId}/frames`, { name: 'Galley goods', document: base as unknown as FrameDocumentJson }).expect(201)).body);
+    const { diff } = revisionComparisonSchema.parse((await owner.get(`/api/frames/${f.id}/revisions/compare?from=1&to=1`).expect(200)).body);
+    const withGoods = reportWithSheetGoods(base).report;
+    // The demo galley's panels and drawer boxes weigh something, so leaving them out would read lighter.
+    expect(withGoods.mass.total_kg).toBeGreaterThan(computeReport(base).mass.total_kg);
+    expect(diff.totals.mass_after_kg).toBeCloseTo(withGoods.mass.total_kg, 6);
+    expect(diff.totals.mass_before_kg).toBeCloseTo(withGoods.mass.total_kg, 6);
   });
 
   it('refuses a missing version (404) and a query that is not two version numbers (400 naming the field)', async () => {

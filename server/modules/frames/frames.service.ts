@@ -10,7 +10,7 @@ import {
   type RevisionSummary,
   type SaveFrameDocumentResponse,
 } from '@shared/api/frames';
-import { computeReport } from '@shared/engine/report';
+import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
 import { compareReports } from '@shared/engine/revision-diff';
 import { parseFrameDocument } from '@shared/model/parse';
 import type { UserRef } from '@shared/api/common';
@@ -268,10 +268,13 @@ export async function nameRevision(em: EntityManager, frame: FrameEntity, versio
   return { version: r.version, savedAt: r.savedAt.toISOString(), savedBy: userRef(r.savedBy), memberCount: r.memberCount, current: false, name: r.name ?? null };
 }
 
-/** Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware. */
+/**
+ * Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware. The
+ * reports are the ones the frame's own pages show, sheet goods included, so the masses and hardware agree with them.
+ */
 export async function compareRevisions(em: EntityManager, frame: FrameEntity, from: number, to: number): Promise<RevisionComparison> {
   const [a, b] = [await getRevision(em, frame, from), await getRevision(em, frame, to)];
-  const report = (r: Revision) => computeReport(parseFrameDocument(r.document));
+  const report = (r: Revision) => reportWithSheetGoods(parseFrameDocument(r.document)).report;
   const { document: _a, ...fromMeta } = a;
   const { document: _b, ...toMeta } = b;
   return { from: fromMeta, to: toMeta, diff: compareReports(report(a), report(b)) };
