@@ -1,9 +1,11 @@
-// `npm run bench:cut [-- --quick] [--random] [--priced] [--no-mip] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
+// `npm run bench:cut [-- --quick] [--random [--covers]] [--priced] [--no-mip] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
 // Runs the stock planner on the classic one-dimensional bin-packing benchmark in ../shared/bench/bpp (read in place;
 // its licence forbids copies; BPP_DIR points elsewhere) and prints, per set: instances at the known optimum, gaps,
 // times, and the same for plain first fit decreasing. `--random` adds generated split lists (optimum known by
-// construction) and `--priced` small priced jobs checked against the exact model on HiGHS; with either alone the
-// classic sets are skipped unless `--quick` or `--set` asks for them. Sequential on purpose: the machine is shared.
+// construction; `--covers` also counts, by complete enumeration within a node budget, how many ways each three-part
+// list can be cut back into whole bars) and `--priced` small priced jobs checked against the exact model on HiGHS;
+// with either alone the classic sets are skipped unless `--quick` or `--set` asks for them. Sequential on purpose: the
+// machine is shared.
 import { writeFileSync } from 'node:fs';
 import highsLoader from 'highs';
 import { useMipSolver, type MipSolver } from '../shared/planner/index';
@@ -13,11 +15,12 @@ import { runInstance, type InstanceResult } from './bench-cut/run-instance';
 import { summarise, formatSummary } from './bench-cut/summary';
 
 function parseArgs(argv: string[]) {
-  const out = { quick: false, random: false, priced: false, mip: true, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
+  const out = { quick: false, random: false, covers: false, priced: false, mip: true, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     if (a === '--quick') out.quick = true;
     else if (a === '--random') out.random = true;
+    else if (a === '--covers') out.covers = true;
     else if (a === '--priced') out.priced = true;
     else if (a === '--no-mip') out.mip = false;
     else if (a === '--time-limit') out.timeLimitMs = Number(argv[++i]);
@@ -43,7 +46,7 @@ if (args.mip) useMipSolver(highs.solve as unknown as MipSolver);
 let generatedOk = true;
 if (args.random) {
   console.log(`split lists, time limit ${args.timeLimitMs} ms each, CPU clock`);
-  generatedOk &&= runSplit(args.timeLimitMs);
+  generatedOk &&= runSplit(args.timeLimitMs, args.covers);
 }
 if (args.priced) {
   console.log(`priced jobs, time limit ${args.timeLimitMs} ms each, CPU clock; exact model on HiGHS`);

@@ -2,6 +2,7 @@
 import type { Highs } from 'highs';
 import { planCutsSync } from '../../shared/planner/index';
 import {
+  BAR_MM,
   HELD_OUT_PRICED,
   HELD_OUT_SPLIT,
   TUNED_PRICED,
@@ -9,6 +10,7 @@ import {
   pricedJob,
   splitList,
 } from './generated';
+import { countCovers } from './count-covers';
 import { reference } from './reference';
 import { cpuClock } from './run-instance';
 
@@ -37,7 +39,10 @@ function report(title: string, rows: Row[]): void {
   for (const r of rows.filter((x) => !x.hit)) console.log(`    ${r.name}: ${r.note}`);
 }
 
-export function runSplit(timeLimitMs: number): boolean {
+/** Node budget of the cover count per list (about 2.5 s on this machine's cores per 100,000 nodes). */
+const COUNT_NODES = 100_000;
+
+export function runSplit(timeLimitMs: number, covers = false): boolean {
   let all = true;
   for (const family of ['split', 'triplets'] as const) {
     for (const [group, seeds] of [
@@ -55,9 +60,19 @@ export function runSplit(timeLimitMs: number): boolean {
         rows.push({ name: l.name, hit, gap: (plan.barCount - l.bars) / l.bars, ms, optimal: plan.optimal, note: `${plan.barCount} bars, optimum ${l.bars} (seed ${seed}), ${ms.toFixed(0)} ms` });
       }
       report(`${family} (${group}, seeds ${seeds[0]}–${seeds[seeds.length - 1]})`, rows);
+      if (covers && family === 'triplets') printCoverCounts(seeds);
     }
   }
   return all;
+}
+
+function printCoverCounts(seeds: readonly number[]): void {
+  for (const seed of seeds) {
+    const l = splitList(seed, 'triplets');
+    const c = countCovers(l.job.parts.map((p) => p.length), l.job.parts.map((p) => p.qty), BAR_MM, COUNT_NODES);
+    const found = c.complete ? `${c.covers} exact cover${c.covers === 1 ? '' : 's'}` : `at least ${c.covers} exact covers (budget spent)`;
+    console.log(`    ${l.name}: ${l.bars} bars, ${c.subsets} three-part fills, ${found}, ${c.nodes} search nodes`);
+  }
 }
 
 export function runPriced(highs: Highs, timeLimitMs: number): boolean {
