@@ -1,11 +1,11 @@
-// `npm run bench:cut [-- --quick] [--random [--covers]] [--priced] [--no-mip] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
+// `npm run bench:cut [-- --quick] [--random [--covers] [--seeds A-B]] [--priced] [--no-mip] [--time-limit MS] [--set NAME ...] [--clock cpu|wall] [--out FILE.tsv]`
 // Runs the stock planner on the classic one-dimensional bin-packing benchmark in ../shared/bench/bpp (read in place;
 // its licence forbids copies; BPP_DIR points elsewhere) and prints, per set: instances at the known optimum, gaps,
 // times, and the same for plain first fit decreasing. `--random` adds generated split lists (optimum known by
 // construction; `--covers` also counts, by complete enumeration within a node budget, how many ways each three-part
-// list can be cut back into whole bars) and `--priced` small priced jobs checked against the exact model on HiGHS;
-// with either alone the classic sets are skipped unless `--quick` or `--set` asks for them. Sequential on purpose: the
-// machine is shared.
+// list can be cut back into whole bars; `--seeds A-B` runs those seeds instead of the tuned and held-out ones) and
+// `--priced` small priced jobs checked against the exact model on HiGHS; with either alone the classic sets are
+// skipped unless `--quick` or `--set` asks for them. Sequential on purpose: the machine is shared.
 import { writeFileSync } from 'node:fs';
 import highsLoader from 'highs';
 import { useMipSolver, type MipSolver } from '../shared/planner/index';
@@ -15,12 +15,17 @@ import { runInstance, type InstanceResult } from './bench-cut/run-instance';
 import { summarise, formatSummary } from './bench-cut/summary';
 
 function parseArgs(argv: string[]) {
-  const out = { quick: false, random: false, covers: false, priced: false, mip: true, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
+  const out = { quick: false, random: false, covers: false, seeds: null as number[] | null, priced: false, mip: true, timeLimitMs: NaN, sets: [] as string[], file: '', clock: 'cpu' as 'cpu' | 'wall' };
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
     if (a === '--quick') out.quick = true;
     else if (a === '--random') out.random = true;
     else if (a === '--covers') out.covers = true;
+    else if (a === '--seeds') {
+      const m = /^(\d+)-(\d+)$/.exec(argv[++i] ?? '');
+      if (!m || Number(m[2]) < Number(m[1]) || Number(m[2]) - Number(m[1]) >= 1000) throw new Error('--seeds: A-B, at most 1,000 seeds');
+      out.seeds = Array.from({ length: Number(m[2]) - Number(m[1]) + 1 }, (_, k) => Number(m[1]) + k);
+    }
     else if (a === '--priced') out.priced = true;
     else if (a === '--no-mip') out.mip = false;
     else if (a === '--time-limit') out.timeLimitMs = Number(argv[++i]);
@@ -46,7 +51,7 @@ if (args.mip) useMipSolver(highs.solve as unknown as MipSolver);
 let generatedOk = true;
 if (args.random) {
   console.log(`split lists, time limit ${args.timeLimitMs} ms each, CPU clock`);
-  generatedOk &&= runSplit(args.timeLimitMs, args.covers);
+  generatedOk &&= runSplit(args.timeLimitMs, args.covers, args.seeds ?? undefined);
 }
 if (args.priced) {
   console.log(`priced jobs, time limit ${args.timeLimitMs} ms each, CPU clock; exact model on HiGHS`);

@@ -39,17 +39,36 @@ function report(title: string, rows: Row[]): void {
   for (const r of rows.filter((x) => !x.hit)) console.log(`    ${r.name}: ${r.note}`);
 }
 
-/** Node budget of the cover count per list (about 2.5 s on this machine's cores per 100,000 nodes). */
+/** Node budget of the cover count per list (about 2.5 s per 100,000 nodes on this machine). */
 const COUNT_NODES = 100_000;
 
-export function runSplit(timeLimitMs: number, covers = false): boolean {
+/** Hits by list size, in tens of bars: where a family stops reaching the optimum. */
+function bySize(rows: Row[], bars: number[]): string {
+  const bands = new Map<number, [number, number]>();
+  rows.forEach((r, i) => {
+    const b = Math.min(90, Math.floor(bars[i] / 10) * 10);
+    const [hit, all] = bands.get(b) ?? [0, 0];
+    bands.set(b, [hit + (r.hit ? 1 : 0), all + 1]);
+  });
+  return [...bands].sort((a, b) => a[0] - b[0]).map(([b, [hit, all]]) => `${b}–${b === 90 ? 100 : b + 9} bars ${hit}/${all}`).join(', ');
+}
+
+/**
+ * Split and triplet lists of the tuned and held-out seeds, or of `seeds` alone (a range of the caller's, for a look
+ * beyond both); false when any list ends above its optimum.
+ */
+export function runSplit(timeLimitMs: number, covers = false, seeds?: number[]): boolean {
   let all = true;
+  const groups: (readonly [string, readonly number[]])[] = seeds
+    ? [['given', seeds]]
+    : [
+        ['tuned', TUNED_SPLIT],
+        ['held out', HELD_OUT_SPLIT],
+      ];
   for (const family of ['split', 'triplets'] as const) {
-    for (const [group, seeds] of [
-      ['tuned', TUNED_SPLIT],
-      ['held out', HELD_OUT_SPLIT],
-    ] as const) {
+    for (const [group, seeds] of groups) {
       const rows: Row[] = [];
+      const bars: number[] = [];
       for (const seed of seeds) {
         const l = splitList(seed, family);
         const t0 = cpuClock();
@@ -57,9 +76,11 @@ export function runSplit(timeLimitMs: number, covers = false): boolean {
         const ms = cpuClock() - t0;
         const hit = plan.barCount === l.bars;
         all &&= hit;
+        bars.push(l.bars);
         rows.push({ name: l.name, hit, gap: (plan.barCount - l.bars) / l.bars, ms, optimal: plan.optimal, note: `${plan.barCount} bars, optimum ${l.bars} (seed ${seed}), ${ms.toFixed(0)} ms` });
       }
       report(`${family} (${group}, seeds ${seeds[0]}–${seeds[seeds.length - 1]})`, rows);
+      console.log(`    by size: ${bySize(rows, bars)}`);
       if (covers && family === 'triplets') printCoverCounts(seeds);
     }
   }
