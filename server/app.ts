@@ -128,7 +128,7 @@ export function createApp(services: Services): Express {
   api.use(workshopsRouter(orm));
   api.use(projectsRouter(orm));
   api.use(projectFileRouter(orm, workers));
-  api.use(framesRouter(orm));
+  api.use(framesRouter(orm, workers));
   api.use(suppliersRouter(orm));
   api.use(ordersRouter(orm, config));
   api.use(cuttingRouter(orm, workers));

@@ -5,16 +5,20 @@ import { makeFrame, makeProject, makeUser, makeWorkshop } from '../support/facto
 import { demoDocument } from './shop-world';
 import { createTestContext, truncateAll, type TestContext } from '../support/test-app';
 
-// Plans run in a pool of worker threads behind a bounded queue. Here the pool is one thread and a queue of one,
-// so the limits show with three requests.
+// Plans and revision compares run in a pool of worker threads behind a bounded queue. Here the pool is one thread
+// and a queue of one, so the limits show with three requests.
 
 let ctx: TestContext;
 let user: ApiClient;
+let frameId: string;
 
 beforeAll(async () => {
   ctx = await createTestContext({}, { threads: 1, queue: 1 });
   await truncateAll(ctx.orm);
-  user = await signedIn(ctx.app, await makeUser(ctx.orm));
+  const u = await makeUser(ctx.orm);
+  user = await signedIn(ctx.app, u);
+  const project = await makeProject(ctx.orm, await makeWorkshop(ctx.orm, [{ user: u, role: 'owner' }]));
+  frameId = (await makeFrame(ctx.orm, project, { document: demoDocument() })).id;
 });
 afterAll(() => ctx.close());
 
@@ -44,6 +48,20 @@ describe('POST /api/plan/cut under load', () => {
     expect(Number(third.headers['retry-after'])).toBeGreaterThan(0);
     expect((await first).status).toBe(200);
     expect((await second).status).toBe(200);
+  });
+
+  it('a revision compare waits in the same queue: past it 503, and once the plans are done it answers', async () => {
+    // Worked out on the event loop, the compare would answer at once however busy the pool is.
+    const first = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 300));
+    const second = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
+    await new Promise((r) => setTimeout(r, 100));
+    const busy = await user.get(`/api/frames/${frameId}/revisions/compare?from=1&to=1`);
+    expect(busy.status).toBe(503);
+    expect(Number(busy.headers['retry-after'])).toBeGreaterThan(0);
+    expect([(await first).status, (await second).status]).toEqual([200, 200]);
+    const res = await user.get(`/api/frames/${frameId}/revisions/compare?from=1&to=1`).expect(200);
+    expect(res.body.diff.totals.same).toBe(demoDocument().members.length);
   });
 
   it('a client that leaves ends its plan: its worker thread is ended and replaced, the next caller is served', async () => {

@@ -13,7 +13,9 @@ import {
   saveFrameDocumentRequestSchema,
 } from '@shared/api/frames';
 import { projectParamsSchema } from '@shared/api/projects';
+import type { RevisionDiff } from '@shared/engine/revision-diff';
 import type { Orm } from '../../db';
+import { clientGone, type WorkerPool } from '../../workers/pool';
 import { currentUserId } from '../../http/current-user';
 import { parseInput } from '../../validate';
 import { can } from '@shared/api/roles';
@@ -34,7 +36,7 @@ import {
   saveFrameDocument,
 } from './frames.service';
 
-export function framesRouter(orm: Orm): Router {
+export function framesRouter(orm: Orm, workers: WorkerPool): Router {
   const router = Router();
 
   router.get('/projects/:projectId/frames', async (req, res) => {
@@ -108,7 +110,9 @@ export function framesRouter(orm: Orm): Router {
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
     const { from, to } = parseInput(compareRevisionsQuerySchema, req.query, 'query');
     const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
-    res.json((await compareRevisions(orm.em, frame, from, to)) satisfies RevisionComparison);
+    const signal = clientGone(res);
+    const compare = (before: unknown, after: unknown) => workers.run<RevisionDiff>({ task: 'compareRevisions', before, after }, signal);
+    res.json((await compareRevisions(orm.em, frame, from, to, compare)) satisfies RevisionComparison);
   });
 
   router.patch('/frames/:frameId/revisions/:version', async (req, res) => {

@@ -10,9 +10,7 @@ import {
   type RevisionSummary,
   type SaveFrameDocumentResponse,
 } from '@shared/api/frames';
-import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
-import { compareReports } from '@shared/engine/revision-diff';
-import { parseFrameDocument } from '@shared/model/parse';
+import type { RevisionDiff } from '@shared/engine/revision-diff';
 import type { UserRef } from '@shared/api/common';
 import type { Role } from '@shared/api/roles';
 import { NotFoundError, UnprocessableError, VersionConflictError } from '../../errors';
@@ -270,14 +268,19 @@ export async function nameRevision(em: EntityManager, frame: FrameEntity, versio
 
 /**
  * Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware. The
- * reports are the ones the frame's own pages show, sheet goods included, so the masses and hardware agree with them.
+ * reports are worked out by `compare` (in a worker thread: ../../workers/revision-compare.task).
  */
-export async function compareRevisions(em: EntityManager, frame: FrameEntity, from: number, to: number): Promise<RevisionComparison> {
+export async function compareRevisions(
+  em: EntityManager,
+  frame: FrameEntity,
+  from: number,
+  to: number,
+  compare: (before: unknown, after: unknown) => Promise<RevisionDiff>,
+): Promise<RevisionComparison> {
   const [a, b] = [await getRevision(em, frame, from), await getRevision(em, frame, to)];
-  const report = (r: Revision) => reportWithSheetGoods(parseFrameDocument(r.document)).report;
-  const { document: _a, ...fromMeta } = a;
-  const { document: _b, ...toMeta } = b;
-  return { from: fromMeta, to: toMeta, diff: compareReports(report(a), report(b)) };
+  const { document: before, ...fromMeta } = a;
+  const { document: after, ...toMeta } = b;
+  return { from: fromMeta, to: toMeta, diff: await compare(before, after) };
 }
 
 /**
