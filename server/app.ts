@@ -130,7 +130,7 @@ export function createApp(services: Services): Express {
   api.use(projectFileRouter(orm, workers));
   api.use(framesRouter(orm, workers));
   api.use(suppliersRouter(orm));
-  api.use(ordersRouter(orm, config));
+  api.use(ordersRouter(orm, config, workers));
   api.use(cuttingRouter(orm, workers));
   api.use(stockRouter(orm));
   api.use(attachmentsRouter(orm));

@@ -3,17 +3,18 @@ import { planCuts } from '@shared/planner';
 import { ensureMipSolver } from '../modules/orders/mip';
 import type { CutJob } from '@shared/planner/job';
 import { readProjectFile } from './project-file.task';
-import { compareDocuments } from './revision-compare.task';
+import { compareDocuments, frameReportOf } from './report.task';
 import { shopDocument, type ShopDocumentInput } from './shop-document.task';
 
 // The worker threads' entry: CPU-heavy tasks that would otherwise hold the event loop (the stock planner,
-// reports behind shop documents and revision compares, pdfmake, reading project files). An InputError is sent back as data, since a
+// frames' reports (for shop documents, orders, cutting and revision compares), pdfmake, reading project files). An InputError is sent back as data, since a
 // worker's errors lose their class on the way to the main thread.
 
 export type HeavyTask =
   | { task: 'plan'; job: CutJob; timeLimitMs?: number }
   | { task: 'shopDocument'; input: ShopDocumentInput }
   | { task: 'readProjectFile'; bytes: Uint8Array }
+  | { task: 'frameReport'; document: unknown }
   | { task: 'compareRevisions'; before: unknown; after: unknown };
 
 export type HeavyResult<T = unknown> = { ok: true; value: T } | { ok: false; field: string; message: string };
@@ -29,6 +30,8 @@ export default async function run(t: HeavyTask): Promise<HeavyResult> {
         return { ok: true, value: await shopDocument(t.input) };
       case 'readProjectFile':
         return { ok: true, value: readProjectFile(t.bytes) };
+      case 'frameReport':
+        return { ok: true, value: frameReportOf(t.document) };
       case 'compareRevisions':
         return { ok: true, value: compareDocuments(t.before, t.after) };
     }

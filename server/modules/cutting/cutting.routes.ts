@@ -35,7 +35,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
   router.get('/frames/:frameId/cutting', async (req, res) => {
     const { frameId } = parseInput(frameIdParamsSchema, req.params, 'params');
     const { frame, role } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'shop.read');
-    res.json(await cuttingState(orm.em, frame, role));
+    res.json(await cuttingState(orm.em, workers, frame, role));
   });
 
   // Starts cutting (cutters may, when nothing is started yet); starting over on a changed design is a designer's call.
@@ -47,12 +47,12 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
     const input = parseInput(startCuttingSchema, req.body);
     const existing = await latestSession(orm.em, frame.id);
     if (existing && !input.restart) {
-      res.json(await cuttingState(orm.em, frame, role));
+      res.json(await cuttingState(orm.em, workers, frame, role));
       return;
     }
     if (existing && !can(role, 'frame.write')) throw new ForbiddenError('Only a designer or owner can start cutting over');
-    await startSession(orm.em, frame, userId, input.settings);
-    res.status(201).json(await cuttingState(orm.em, frame, role));
+    await startSession(orm.em, workers, frame, userId, input.settings);
+    res.status(201).json(await cuttingState(orm.em, workers, frame, role));
   });
 
   router.post('/frames/:frameId/cutting/ticks', async (req, res) => {
@@ -61,7 +61,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
     const { frame, role } = await authorizeFrame(orm.em, userId, frameId, 'cuts.tick');
     const { cutKey } = parseInput(tickRequestSchema, req.body);
     await tick(orm.em, frame.id, userId, cutKey);
-    res.json(await cuttingState(orm.em, frame, role));
+    res.json(await cuttingState(orm.em, workers, frame, role));
   });
 
   router.delete('/frames/:frameId/cutting/ticks', async (req, res) => {
@@ -69,7 +69,7 @@ export function cuttingRouter(orm: Orm, workers: WorkerPool): Router {
     const { frame, role } = await authorizeFrame(orm.em, currentUserId(req), frameId, 'cuts.tick');
     const { cutKey } = parseInput(tickRequestSchema, req.query, 'query');
     await untick(orm.em, frame.id, cutKey);
-    res.json(await cuttingState(orm.em, frame, role));
+    res.json(await cuttingState(orm.em, workers, frame, role));
   });
 
   // Printed documents and CSV for a frame. The saw list follows the frozen cutting plan when cutting has started on

@@ -8,7 +8,9 @@ import { planCutKeys } from '@shared/api/cut-plan';
 import { cuttingKey } from '@shared/engine/cutting-key';
 import { diffReports } from '@shared/engine/diff';
 import type { FrameReport } from '@shared/engine/report';
+import { InputError } from '@shared/errors';
 import { UnprocessableError } from '../../errors';
+import type { WorkerPool } from '../../workers/pool';
 import type { FrameEntity } from '../frames/frame.entity';
 import { frameReport, planFrame, shopSettingsFor, supplierFor } from '../orders/frame-shop.service';
 import { PLAN_TIME_LIMIT_MS } from '../orders/orders.service';
@@ -31,19 +33,21 @@ export async function latestSessionKey(em: EntityManager, frameId: string): Prom
   return rows[0] ? `${rows[0].id}@${rows[0].frame_version}` : null;
 }
 
-function reportOrNull(frame: FrameEntity): FrameReport | null {
+async function reportOrNull(frame: FrameEntity, workers: WorkerPool): Promise<FrameReport | null> {
   try {
-    return frameReport(frame);
-  } catch {
-    return null;
+    return await frameReport(frame, workers);
+  } catch (err) {
+    // Only a document the engine cannot read; a busy pool (503) is the caller's to hear about.
+    if (err instanceof InputError) return null;
+    throw err;
   }
 }
 
-export async function cuttingState(em: EntityManager, frame: FrameEntity, role: Role): Promise<CuttingState> {
+export async function cuttingState(em: EntityManager, workers: WorkerPool, frame: FrameEntity, role: Role): Promise<CuttingState> {
   const session = await latestSession(em, frame.id);
   const ticks = session ? await em.find(CutTick, { session: session.id }, { orderBy: { tickedAt: 'asc' }, populate: ['tickedBy'] }) : [];
   let reuse: CuttingState['reuse'] = null;
-  const report = reportOrNull(frame);
+  const report = await reportOrNull(frame, workers);
   // A design the engine cannot read has nothing in common with the one being cut.
   const currentKey = report ? cuttingKey(report.members) : `unreadable-${frame.version}`;
   const sessionKey = session ? cuttingKey(session.plan.members) : null;
@@ -88,8 +92,14 @@ export async function cuttingState(em: EntityManager, frame: FrameEntity, role: 
 }
 
 /** Freezes the plan for the frame's current version (against the workshop's first supplier and the shelf). */
-export async function startSession(em: EntityManager, frame: FrameEntity, userId: string, asked: { trim_mm?: number; minOffcut_mm?: number }): Promise<CutSessionEntity> {
-  const report = frameReport(frame);
+export async function startSession(
+  em: EntityManager,
+  workers: WorkerPool,
+  frame: FrameEntity,
+  userId: string,
+  asked: { trim_mm?: number; minOffcut_mm?: number },
+): Promise<CutSessionEntity> {
+  const report = await frameReport(frame, workers);
   const supplier = await supplierFor(em, frame.project.workshop.id, undefined);
   const settings = shopSettingsFor(report, asked);
   const planned = await planFrame(em, frame, report, { supplier, useShelf: true, ...settings, timeLimitMs: PLAN_TIME_LIMIT_MS });

@@ -268,7 +268,7 @@ export async function nameRevision(em: EntityManager, frame: FrameEntity, versio
 
 /**
  * Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware. The
- * reports are worked out by `compare` (in a worker thread: ../../workers/revision-compare.task).
+ * reports are worked out by `compare` (in a worker thread: ../../workers/report.task).
  */
 export async function compareRevisions(
   em: EntityManager,

@@ -1,10 +1,9 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { FrameReport } from '@shared/engine/report';
-import { reportWithSheetGoods } from '@shared/panels/report-with-goods';
-import { parseFrameDocument } from '@shared/model/parse';
 import { planShop, type ShelfOffcut, type ShopPlanResult, type ShopSettings, type StockOffer } from '@shared/shop/shop-plan';
 import type { ShopMeta, ShopUnits } from '@shared/shop/types';
 import { UnprocessableError } from '../../errors';
+import type { WorkerPool } from '../../workers/pool';
 import type { FrameEntity } from '../frames/frame.entity';
 import { StockOffcut } from '../stock/stock-offcut.entity';
 import { Supplier, type SupplierEntity } from '../suppliers/supplier.entity';
@@ -15,9 +14,12 @@ import { ensureMipSolver } from './mip';
 // Everything the shop outputs of one frame need: its report, the plan against a supplier's bars and the shelf,
 // and the facts printed on every page.
 
-export function frameReport(frame: FrameEntity): FrameReport {
-  // With the drawers', panels' and countertop's hardware and mass, so the shop's lists match the editor's.
-  return reportWithSheetGoods(parseFrameDocument(frame.document)).report;
+/**
+ * With the drawers', panels' and countertop's hardware and mass, so the shop's lists match the editor's; worked out
+ * in a worker thread (../../workers/report.task). An unreadable document is an InputError.
+ */
+export function frameReport(frame: FrameEntity, workers: WorkerPool): Promise<FrameReport> {
+  return workers.run<FrameReport>({ task: 'frameReport', document: frame.document });
 }
 
 export function today(): string {

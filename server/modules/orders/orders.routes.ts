@@ -6,6 +6,7 @@ import type { Orm } from '../../db';
 import { currentUserId } from '../../http/current-user';
 import { createMailer } from '../../mail/mailer';
 import { parseInput } from '../../validate';
+import type { WorkerPool } from '../../workers/pool';
 import { asNotFound, authorizeWorkshop } from '../access/access.service';
 import { createOrder, deleteDraft, findOrder, listOrders, markReceived, orderCsv, orderPdf, sendOrder, supplierMessage, toOrderDetail } from './orders.service';
 
@@ -18,7 +19,7 @@ export function sendFile(res: Response, body: Buffer | string, type: string, fil
   res.send(body);
 }
 
-export function ordersRouter(orm: Orm, config: Config): Router {
+export function ordersRouter(orm: Orm, config: Config, workers: WorkerPool): Router {
   const router = Router();
 
   const orderWithRole = async (userId: string, orderId: string, action: 'read' | 'project.write') => {
@@ -37,7 +38,7 @@ export function ordersRouter(orm: Orm, config: Config): Router {
     const { workshopId } = parseInput(workshopParamsSchema, req.params, 'params');
     const userId = currentUserId(req);
     await authorizeWorkshop(orm.em, userId, workshopId, 'project.write');
-    res.status(201).json(await createOrder(orm.em, workshopId, userId, parseInput(createOrderSchema, req.body)));
+    res.status(201).json(await createOrder(orm.em, workers, workshopId, userId, parseInput(createOrderSchema, req.body)));
   });
 
   router.get('/orders/:orderId', async (req, res) => {

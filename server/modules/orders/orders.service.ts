@@ -11,6 +11,7 @@ import { ConflictError, HttpError, NotFoundError } from '../../errors';
 import type { Mailer } from '../../mail/mailer';
 import { MailError } from '../../mail/mailer';
 import { orderListPdf } from '../../pdf';
+import type { WorkerPool } from '../../workers/pool';
 import { Frame } from '../frames/frame.entity';
 import { User } from '../users/user.entity';
 import { Workshop } from '../workshops/workshop.entity';
@@ -62,12 +63,18 @@ function newReference(): string {
 }
 
 /** A draft order from a frame's current design, planned against the supplier's bars (and the shelf's offcuts). */
-export async function createOrder(em: EntityManager, workshopId: string, userId: string, input: z.output<typeof createOrderSchema>): Promise<OrderDetail> {
+export async function createOrder(
+  em: EntityManager,
+  workers: WorkerPool,
+  workshopId: string,
+  userId: string,
+  input: z.output<typeof createOrderSchema>,
+): Promise<OrderDetail> {
   const frame = await em.findOne(Frame, { id: input.frameId, deletedAt: null, project: { workshop: workshopId, deletedAt: null } }, { populate: ['project'] });
   if (!frame) throw new HttpError('unprocessable', 'That frame is not in this workshop', { frameId: 'Unknown frame' });
   const supplier = await supplierFor(em, workshopId, input.supplierId);
   if (!supplier) throw new HttpError('unprocessable', 'Choose a supplier', { supplierId: 'Required' });
-  const report = frameReport(frame);
+  const report = await frameReport(frame, workers);
   const plan = await planFrame(em, frame, report, { supplier, useShelf: input.useShelf, ...input.settings, timeLimitMs: PLAN_TIME_LIMIT_MS });
   const meta = await shopMeta(em, frame, report, { paper: input.paper });
   const order = orderList(plan.planned, supplier.currency, { cutFee: Number(supplier.cutFee) }, meta.units);
