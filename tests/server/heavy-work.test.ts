@@ -31,6 +31,17 @@ const slowJob = () => ({
   parts: Array.from({ length: 400 }, (_, i) => ({ length: 700 + ((i * 7919) % 2300), qty: 20 })),
 });
 
+/** Runs `during` while one slow plan holds the pool's thread and another fills its queue; both plans must finish. */
+async function whilePoolIsFull<T>(during: () => Promise<T>): Promise<T> {
+  const first = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
+  await new Promise((r) => setTimeout(r, 300));
+  const second = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
+  await new Promise((r) => setTimeout(r, 100));
+  const out = await during();
+  expect([(await first).status, (await second).status]).toEqual([200, 200]);
+  return out;
+}
+
 describe('POST /api/plan/cut under load', () => {
   it('a quantity of 1e9 is refused with 400 naming the parts, before any planning', async () => {
     const res = await user.post('/api/plan/cut', { job: { stock: [{ length: 6000 }], parts: [{ length: 500, qty: 1e9 }] } });
@@ -39,30 +50,24 @@ describe('POST /api/plan/cut under load', () => {
   });
 
   it('past the queue → 503 with Retry-After; the running and the queued plan still finish', async () => {
-    const first = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
-    await new Promise((r) => setTimeout(r, 300));
-    const second = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
-    await new Promise((r) => setTimeout(r, 100));
-    const third = await user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 });
+    const third = await whilePoolIsFull(() => user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }));
     expect(third.status).toBe(503);
     expect(apiErrorSchema.parse(third.body).error.code).toBe('unavailable');
     expect(Number(third.headers['retry-after'])).toBeGreaterThan(0);
-    expect((await first).status).toBe(200);
-    expect((await second).status).toBe(200);
   });
 
-  it('a revision compare waits in the same queue: past it 503, and once the plans are done it answers', async () => {
-    // Worked out on the event loop, the compare would answer at once however busy the pool is.
-    const first = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 1500 }).then((r) => r);
-    await new Promise((r) => setTimeout(r, 300));
-    const second = user.post('/api/plan/cut', { job: slowJob(), timeLimitMs: 200 }).then((r) => r);
-    await new Promise((r) => setTimeout(r, 100));
-    const busy = await user.get(`/api/frames/${frameId}/revisions/compare?from=1&to=1`);
-    expect(busy.status).toBe(503);
-    expect(Number(busy.headers['retry-after'])).toBeGreaterThan(0);
-    expect([(await first).status, (await second).status]).toEqual([200, 200]);
+  it('a revision compare and the cutting view wait in the same queue: past it 503, and once the plans are done they answer', async () => {
+    // Worked out on the event loop, their reports would come at once however busy the pool is.
+    const [compare, cutting] = await whilePoolIsFull(() =>
+      Promise.all([user.get(`/api/frames/${frameId}/revisions/compare?from=1&to=1`), user.get(`/api/frames/${frameId}/cutting`)]),
+    );
+    for (const busy of [compare, cutting]) {
+      expect(busy.status).toBe(503);
+      expect(Number(busy.headers['retry-after'])).toBeGreaterThan(0);
+    }
     const res = await user.get(`/api/frames/${frameId}/revisions/compare?from=1&to=1`).expect(200);
     expect(revisionComparisonSchema.parse(res.body).diff.totals.same).toBe((demoDocument().members as unknown[]).length);
+    await user.get(`/api/frames/${frameId}/cutting`).expect(200);
   });
 
   it('a client that leaves ends its plan: its worker thread is ended and replaced, the next caller is served', async () => {
