@@ -6,9 +6,9 @@ import { readProjectFile } from './project-file.task';
 import { compareDocuments, frameReportOf } from './report.task';
 import { shopDocument, type ShopDocumentInput } from './shop-document.task';
 
-// The worker threads' entry: CPU-heavy tasks that would otherwise hold the event loop (the stock planner,
-// frames' reports (for shop documents, orders, cutting and revision compares), pdfmake, reading project files). An InputError is sent back as data, since a
-// worker's errors lose their class on the way to the main thread.
+// The worker threads' entry: CPU-heavy tasks that would otherwise hold the event loop (the stock planner, frames'
+// reports for shop documents, orders, cutting and revision compares, pdfmake, reading project files). An InputError
+// is sent back as data, since a worker's errors lose their class on the way to the main thread.
 
 export type HeavyTask =
   | { task: 'plan'; job: CutJob; timeLimitMs?: number }

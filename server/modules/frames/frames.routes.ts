@@ -13,7 +13,6 @@ import {
   saveFrameDocumentRequestSchema,
 } from '@shared/api/frames';
 import { projectParamsSchema } from '@shared/api/projects';
-import type { RevisionDiff } from '@shared/engine/revision-diff';
 import type { Orm } from '../../db';
 import { clientGone, type WorkerPool } from '../../workers/pool';
 import { currentUserId } from '../../http/current-user';
@@ -110,9 +109,7 @@ export function framesRouter(orm: Orm, workers: WorkerPool): Router {
     const { frameId } = parseInput(frameParamsSchema, req.params, 'params');
     const { from, to } = parseInput(compareRevisionsQuerySchema, req.query, 'query');
     const { frame } = await authorizeFrame(orm.em, userId, frameId, 'read');
-    const signal = clientGone(res);
-    const compare = (before: unknown, after: unknown) => workers.run<RevisionDiff>({ task: 'compareRevisions', before, after }, signal);
-    res.json((await compareRevisions(orm.em, frame, from, to, compare)) satisfies RevisionComparison);
+    res.json((await compareRevisions(orm.em, workers, frame, from, to, clientGone(res))) satisfies RevisionComparison);
   });
 
   router.patch('/frames/:frameId/revisions/:version', async (req, res) => {

@@ -10,10 +10,11 @@ import {
   type RevisionSummary,
   type SaveFrameDocumentResponse,
 } from '@shared/api/frames';
-import type { RevisionDiff } from '@shared/engine/revision-diff';
 import type { UserRef } from '@shared/api/common';
 import type { Role } from '@shared/api/roles';
+import type { RevisionDiff } from '@shared/engine/revision-diff';
 import { NotFoundError, UnprocessableError, VersionConflictError } from '../../errors';
+import type { WorkerPool } from '../../workers/pool';
 import { binCutoff } from '../access/access.service';
 import { Project, type ProjectEntity } from '../projects/project.entity';
 import { User, type UserEntity } from '../users/user.entity';
@@ -267,20 +268,22 @@ export async function nameRevision(em: EntityManager, frame: FrameEntity, versio
 }
 
 /**
- * Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware. The
- * reports are worked out by `compare` (in a worker thread: ../../workers/report.task).
+ * Both revisions' reports side by side: which members were added, removed, moved, and the cut list and hardware,
+ * worked out in a worker thread (../../workers/report.task); `signal` ends it when the client leaves.
  */
 export async function compareRevisions(
   em: EntityManager,
+  workers: WorkerPool,
   frame: FrameEntity,
   from: number,
   to: number,
-  compare: (before: unknown, after: unknown) => Promise<RevisionDiff>,
+  signal?: AbortSignal,
 ): Promise<RevisionComparison> {
   const [a, b] = [await getRevision(em, frame, from), await getRevision(em, frame, to)];
   const { document: before, ...fromMeta } = a;
   const { document: after, ...toMeta } = b;
-  return { from: fromMeta, to: toMeta, diff: await compare(before, after) };
+  const diff = await workers.run<RevisionDiff>({ task: 'compareRevisions', before, after }, signal);
+  return { from: fromMeta, to: toMeta, diff };
 }
 
 /**
