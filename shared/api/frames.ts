@@ -97,7 +97,13 @@ export type Revision = z.infer<typeof revisionSchema>;
  */
 export const REVISION_PAUSE_MINUTES = 10;
 
-const versionSchema = z.coerce.number({ message: 'Must be a whole number' }).int({ message: 'Must be a whole number' }).min(1, { message: 'At least 1' });
+/** Versions are stored as a PostgreSQL integer: anything past its largest value is a slip, not a version. */
+const MAX_VERSION = 2_147_483_647;
+const versionSchema = z.coerce
+  .number({ message: 'Must be a whole number' })
+  .int({ message: 'Must be a whole number' })
+  .min(1, { message: 'At least 1' })
+  .max(MAX_VERSION, { message: `At most ${MAX_VERSION}` });
 
 const revisionNameSchema = text(
   z.string({ message: 'Must be text' }).trim().max(80, { message: 'At most 80 characters' }),

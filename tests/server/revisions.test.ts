@@ -209,6 +209,10 @@ describe('comparing two revisions', () => {
     const bad = await owner.get(`/api/frames/${f.id}/revisions/compare?from=one&to=1`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toHaveProperty('from');
+    // Past what a version column holds (PostgreSQL integer): refused as input, not sent to the database.
+    const huge = await owner.get(`/api/frames/${f.id}/revisions/compare?from=1&to=99999999999`);
+    expect(huge.status).toBe(400);
+    expect(huge.body.error.fields).toHaveProperty('to');
   });
 });
 
