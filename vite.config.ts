@@ -56,6 +56,10 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 60000,
           hookTimeout: 120000,
+          // The page follows an edit when its report worker and the next render have run; on a loaded CI machine that
+          // took longer than the 1 s default (an undo's cut list once did), so polls wait as long as a locator would
+          // three times over.
+          expect: { poll: { timeout: 15_000 } },
         },
       },
     ],
